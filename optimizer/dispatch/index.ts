@@ -1,0 +1,10 @@
+// Public API of the single-operating-point recommendation (the lead wires this into optimizer/index.ts).
+export { dispatchLoad, equalSplit } from './economic-dispatch';
+export type {
+  DispatchFailureRule,
+  DispatchFeasible,
+  DispatchInfeasible,
+  DispatchOptions,
+  DispatchResult,
+  UnitLoad,
+} from './economic-dispatch';

@@ -9,7 +9,7 @@
  */
 import { curveFuelKgPerH, type QuadraticFuelCurve } from '../plant';
 import { boundedPolynomialLeastSquares, polynomialLeastSquares, type LeastSquaresResult } from './least-squares';
-import { HUBER_K, TUKEY_C, robustScale, robustWeight, type RobustMethod } from './robust';
+import { HUBER_K, TUKEY_C, robustPsiDerivative, robustScale, robustWeight, type RobustMethod } from './robust';
 import { studentTQuantile } from './student-t';
 
 /** One day of one set: average load while running and the fuel rate corrected to ISO LCV. */
@@ -294,7 +294,19 @@ export function fitFuelCurve(points: DailyFuelPoint[], options: FitFuelCurveOpti
   if (!converged) warnings.push(`robust iterations did not converge in ${maxIterations} steps`);
 
   const [a, b, c] = [res.coefficients[0], res.coefficients[1], res.coefficients[2] ?? 0];
-  const cov3 = [0, 1, 2].map((i) => [0, 1, 2].map((j) => res.covariance[i]?.[j] ?? 0));
+  let cov3 = [0, 1, 2].map((i) => [0, 1, 2].map((j) => res.covariance[i]?.[j] ?? 0));
+  let residualSd = res.residualSd;
+  const finalStage = stages[stages.length - 1];
+  if (finalStage && scale > 1e-12 * yScale && res.dof > 0) {
+    const free = powers.filter((q) => !res.activeAtZero.includes(q));
+    const corrected = huberCovariance(res.residuals, baseW, nDays, free.length, scale, finalStage, () =>
+      polynomialLeastSquares(x, y, { powers: free, weights: baseW }),
+    );
+    if (corrected) {
+      cov3 = corrected;
+      residualSd = scale;
+    }
+  }
   const curve: QuadraticFuelCurve = { kind: 'quadratic', a, b, c };
 
   const effectiveWeights = new Array<number>(points.length).fill(0);
@@ -340,7 +352,7 @@ export function fitFuelCurve(points: DailyFuelPoint[], options: FitFuelCurveOpti
     standardErrors: { a: Math.sqrt(cov3[0][0]), b: Math.sqrt(cov3[1][1]), c: Math.sqrt(cov3[2][2]) },
     activeConstraints: res.activeAtZero.map((q) => (q === 0 ? 'a' : 'c')),
     rSquared: res.rSquared,
-    residualSdKgPerH: res.residualSd,
+    residualSdKgPerH: residualSd,
     days: nDays,
     loadSpanPct,
     effectiveWeights,
@@ -357,6 +369,42 @@ export function fitFuelCurve(points: DailyFuelPoint[], options: FitFuelCurveOpti
     atLoads,
     warnings,
   };
+}
+
+/**
+ * Huber's covariance of an M-estimate (Huber & Ronchetti, Robust Statistics, §7.6, eq. 7.84 with the
+ * correction factor K = 1 + (p/n)·Var(ψ')/E(ψ')²): K²·[Σψ²/(n−p)]/[Σψ'/n]²·σ̂²·(XᵀWX)⁻¹, W the hours weights.
+ * ψ is summed over the days only; the unit (XᵀWX)⁻¹ comes from a fit on the same face with the base weights.
+ * Returns null when no day lies inside the ψ' support (then the reweighted fit's covariance stands).
+ */
+function huberCovariance(
+  residuals: number[],
+  baseW: number[],
+  nDays: number,
+  p: number,
+  scale: number,
+  stage: { method: RobustMethod; k: number },
+  baseFit: () => LeastSquaresResult,
+): number[][] | null {
+  let sumPsi2 = 0;
+  let sumD = 0;
+  let sumD2 = 0;
+  for (let j = 0; j < nDays; j++) {
+    const z = (residuals[j] * Math.sqrt(baseW[j])) / scale;
+    const psi = z * robustWeight(z, stage.method, stage.k);
+    const d = robustPsiDerivative(z, stage.method, stage.k);
+    sumPsi2 += psi * psi;
+    sumD += d;
+    sumD2 += d * d;
+  }
+  const base = baseFit();
+  const meanD = sumD / nDays;
+  if (!(meanD > 0) || !(base.residualSd > 0) || nDays <= p) return null;
+  const varD = sumD2 / nDays - meanD * meanD;
+  const kFactor = 1 + ((p / nDays) * varD) / (meanD * meanD);
+  const factor = (kFactor * kFactor * (sumPsi2 / (nDays - p))) / (meanD * meanD);
+  const unit = 1 / (base.residualSd * base.residualSd);
+  return [0, 1, 2].map((i) => [0, 1, 2].map((j) => (base.covariance[i]?.[j] ?? 0) * unit * factor * scale * scale));
 }
 
 /** What the evaluation functions need from a fit. */

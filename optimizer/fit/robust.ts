@@ -48,3 +48,22 @@ export function robustScale(residuals: number[]): number {
   if (residuals.length === 0) throw new Error('robustScale requires at least one residual');
   return medianAbsoluteDeviation(residuals) / NORMAL_MAD_FACTOR;
 }
+
+/**
+ * Derivative ψ'(z) of the M-estimation ψ function, used by Huber's covariance correction.
+ *
+ * Huber: 1 for |z| ≤ k, else 0. Tukey bisquare: (1 − u²)(1 − 5u²) with u = z/c for |z| < c, else 0. 'none': 1.
+ * Reference: Huber & Ronchetti, Robust Statistics, §7.6. Cost: O(1). Throws on a non-positive tuning.
+ *
+ * @example robustPsiDerivative(0, 'tukey') // 1
+ */
+export function robustPsiDerivative(z: number, method: RobustMethod, tuning?: number): number {
+  if (method === 'none') return 1;
+  const k = tuning ?? (method === 'huber' ? HUBER_K : TUKEY_C);
+  if (!(k > 0)) throw new Error('robustPsiDerivative requires a tuning constant > 0');
+  const a = Math.abs(z);
+  if (method === 'huber') return a <= k ? 1 : 0;
+  if (a >= k) return 0;
+  const u2 = (z / k) ** 2;
+  return (1 - u2) * (1 - 5 * u2);
+}

@@ -8,3 +8,16 @@ export type {
   DispatchResult,
   UnitLoad,
 } from './economic-dispatch';
+export { rankCombinations, requiredMarginKw } from './combinations';
+export type {
+  CombinationRule,
+  Demand,
+  RankedCombination,
+  RankFeasible,
+  RankInfeasible,
+  RankOptions,
+  RankResult,
+  RejectedCombination,
+  SectionDispatch,
+  UnitReason,
+} from './combinations';

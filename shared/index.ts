@@ -1,0 +1,7 @@
+// The contract both sides use: zod schemas, inferred types, error codes, limits, roles.
+export * from './roles';
+export * from './errors';
+export * from './limits';
+export * from './schemas/auth';
+export * from './schemas/users';
+export * from './schemas/vessels';

@@ -107,7 +107,7 @@ type SectionOption =
   | { ok: true; mask: number; members: PreparedUnit[]; dispatch: DispatchFeasible; capacityKw: number; minKw: number }
   | { ok: false; mask: number; rule: CombinationRule; minKw: number };
 
-interface Section {
+export interface Section {
   busSection: string;
   /** Label used in reasons: '' when the bus tie is closed, ' on bus section A' when open. */
   where: string;
@@ -251,7 +251,8 @@ function enumerateSection(section: Section, rule: ReserveRule, relTol: number): 
   section.options = options;
 }
 
-function buildSections(prepared: PreparedUnit[], demand: Demand, rule: ReserveRule): Section[] {
+/** Splits the plant into the sections dispatched separately (one 'all' section with the bus tie closed). */
+export function buildSections(prepared: PreparedUnit[], demand: Demand, rule: ReserveRule): Section[] {
   const usable = prepared.filter((p) => p.unit.available);
   const checkLoad = (kw: number, what: string): number => {
     if (!Number.isFinite(kw) || kw < 0) throw new Error(`rankCombinations requires a finite load ≥ 0 kW${what}`);

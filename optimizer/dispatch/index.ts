@@ -21,3 +21,5 @@ export type {
   SectionDispatch,
   UnitReason,
 } from './combinations';
+export { buildSinglePointMilp, loadHighs, solveSinglePointMilp } from './milp';
+export type { LpSolver, MilpResult, SinglePointMilp } from './milp';

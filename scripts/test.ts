@@ -12,7 +12,6 @@ import { randomBytes } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import { connect } from '../server/db/client';
-import { seedDemo } from '../seed/index';
 import { migrateDatabase, ROOT } from './lib/bootstrap';
 import { ensureCluster, ensureDatabase, freePort, stopCluster } from './lib/postgres';
 import { buildClient, runBin } from './lib/run';
@@ -109,6 +108,7 @@ async function main(): Promise<number> {
       await ensureDatabase(cluster, e2eDb);
       const url = cluster.urlFor(e2eDb);
       await migrateDatabase(url);
+      const { seedDemo } = await import('../seed/index');
       const database = connect(url, 4);
       try {
         await seedDemo(database.db);

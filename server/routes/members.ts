@@ -8,28 +8,29 @@ import { createInvitation, listInvitations, listMembers, removeMember, revokeInv
 
 export function membersRouter(deps: AppDeps): Router {
   const r = Router();
-  r.use(requireCapability('users:manage'));
+  // Guard each route (a router-level `use` would also catch requests meant for routers mounted after this one).
+  const admin = requireCapability('users:manage');
 
-  r.get('/members', async (req, res) => {
+  r.get('/members', admin, async (req, res) => {
     res.json(await listMembers(deps, actorOf(req)));
   });
-  r.patch('/members/:membershipId', async (req, res) => {
+  r.patch('/members/:membershipId', admin, async (req, res) => {
     const input = parseBody(updateMemberSchema, req.body, 'member');
     res.json(await updateMember(deps, actorOf(req), idParam(req.params.membershipId, 'Member'), input));
   });
-  r.delete('/members/:membershipId', async (req, res) => {
+  r.delete('/members/:membershipId', admin, async (req, res) => {
     await removeMember(deps, actorOf(req), idParam(req.params.membershipId, 'Member'));
     res.status(204).end();
   });
 
-  r.get('/invitations', async (req, res) => {
+  r.get('/invitations', admin, async (req, res) => {
     res.json(await listInvitations(deps, actorOf(req)));
   });
-  r.post('/invitations', async (req, res) => {
+  r.post('/invitations', admin, async (req, res) => {
     const input = parseBody(createInvitationSchema, req.body, 'invitation');
     res.status(201).json(await createInvitation(deps, actorOf(req), input, publicOrigin(deps, req)));
   });
-  r.delete('/invitations/:invitationId', async (req, res) => {
+  r.delete('/invitations/:invitationId', admin, async (req, res) => {
     await revokeInvitation(deps, actorOf(req), idParam(req.params.invitationId, 'Invitation'));
     res.status(204).end();
   });

@@ -111,6 +111,21 @@ function requireNonNegative(field: string, v: unknown): number {
   return n;
 }
 
+/** Today's amount from a cumulative reading: the meter delta, or null with a flag. */
+function fromCumulative(
+  field: 'runningHours' | 'energy',
+  readingField: string,
+  unit: string,
+  currentReading: number,
+  previousReading: number | null | undefined,
+  replacement: MeterReplacement | undefined,
+  flags: QualityFlag[],
+): { amount: number | null; reading: number } {
+  const reading = requireFinite(`${field}.${readingField}`, currentReading);
+  const result = meterDelta({ previousReading, currentReading: reading, replacement });
+  return { amount: fromMeter(result, field, unit, flags), reading };
+}
+
 /** Turns a meter result into a value or a flag. */
 function fromMeter(result: MeterDeltaResult, field: string, unit: string, flags: QualityFlag[]): number | null {
   if (result.ok) return result.delta;
@@ -202,13 +217,8 @@ export function deriveDailyRow(raw: RawDailyLog, context: DailyRowContext): Deri
   let hoursRun: number | null;
   let hoursReading: number | null = null;
   if (raw.runningHours.kind === 'cumulative') {
-    hoursReading = requireFinite('runningHours.readingH', raw.runningHours.readingH);
-    hoursRun = fromMeter(
-      meterDelta({ previousReading: context.previous?.runningHoursReadingH, currentReading: hoursReading, replacement: raw.runningHours.replacement }),
-      'runningHours',
-      'h',
-      flags,
-    );
+    const { readingH, replacement } = raw.runningHours;
+    ({ amount: hoursRun, reading: hoursReading } = fromCumulative('runningHours', 'readingH', 'h', readingH, context.previous?.runningHoursReadingH, replacement, flags));
   } else if (raw.runningHours.kind === 'run') {
     hoursRun = requireFinite('runningHours.hoursRun', raw.runningHours.hoursRun);
   } else {
@@ -225,13 +235,8 @@ export function deriveDailyRow(raw: RawDailyLog, context: DailyRowContext): Deri
   let kwh: number | null;
   let energyReading: number | null = null;
   if (raw.energy.kind === 'cumulative') {
-    energyReading = requireFinite('energy.readingKwh', raw.energy.readingKwh);
-    kwh = fromMeter(
-      meterDelta({ previousReading: context.previous?.energyReadingKwh, currentReading: energyReading, replacement: raw.energy.replacement }),
-      'energy',
-      'kWh',
-      flags,
-    );
+    const { readingKwh, replacement } = raw.energy;
+    ({ amount: kwh, reading: energyReading } = fromCumulative('energy', 'readingKwh', 'kWh', readingKwh, context.previous?.energyReadingKwh, replacement, flags));
   } else if (raw.energy.kind === 'produced') {
     kwh = requireNonNegative('energy.kwh', raw.energy.kwh);
   } else {

@@ -90,7 +90,7 @@ export function table54BBand(density15KgPerM3: number): Table54BBand {
  * Reference: ASTM D1250-80 / ISO 91-1 Table 54B (see module note). Cost O(1).
  * Throws when the density lies outside 653 to 1075 kg/m³.
  *
- * @example thermalExpansion54BPerC(990) // ≈ 6.8186e-4
+ * @example thermalExpansion54BPerC(990) // ≈ 6.8188e-4
  */
 export function thermalExpansion54BPerC(density15KgPerM3: number): number {
   const band = table54BBand(density15KgPerM3);
@@ -161,7 +161,7 @@ export function volumeAt15M3(v: ObservedFuelVolume): number {
  *
  * Reference: ASTM D1250-80 / ISO 91-1 Table 54B for VCF. Cost O(1). Throws as volumeAt15M3.
  *
- * @example massAt15Kg({ volumeL: 1000, tempC: 40, density15KgPerM3: 860 }) // ≈ 842.5
+ * @example massAt15Kg({ volumeL: 1000, tempC: 40, density15KgPerM3: 860 }) // ≈ 842.31
  */
 export function massAt15Kg(v: ObservedFuelVolume): number {
   return volumeAt15M3(v) * v.density15KgPerM3;

@@ -51,6 +51,10 @@ export const TABLE_54B_MIN_TEMP_C = -18;
 /**
  * Highest temperature of Table 54B for a density, °C: 95 °C below 778 kg/m³, 125 °C below 824 kg/m³, 150 °C up to
  * 1075 kg/m³ (the stepped upper limits of the printed table; from memory).
+ *
+ * Cost O(1). Does not throw (the density range is checked by table54BBand).
+ *
+ * @example table54BMaxTempC(990) // 150
  */
 export function table54BMaxTempC(density15KgPerM3: number): number {
   if (density15KgPerM3 < 778) return 95;

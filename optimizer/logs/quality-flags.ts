@@ -56,7 +56,13 @@ const SEVERITY: Record<QualityFlagCode, QualityFlagSeverity> = {
   DUPLICATE_DATE: 'error',
 };
 
-/** A flag with the code's fixed severity. */
+/**
+ * A flag with the code's fixed severity.
+ *
+ * Cost O(1). Does not throw.
+ *
+ * @example qualityFlag('LOW_LOAD', 'avgLoadPct', 'Average load 20 % is below 30 %.').severity // 'warning'
+ */
 export function qualityFlag(code: QualityFlagCode, field: string, message: string): QualityFlag {
   return { code, field, severity: SEVERITY[code], message };
 }

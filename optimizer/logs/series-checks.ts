@@ -28,7 +28,13 @@ export function dayNumber(date: string): number {
   throw new Error(`dayNumber requires a date as YYYY-MM-DD (got ${String(date)})`);
 }
 
-/** YYYY-MM-DD of a day number. */
+/**
+ * YYYY-MM-DD of a day number (days since 1970-01-01, UTC); the inverse of dayNumber.
+ *
+ * Cost O(1). Throws (RangeError from Date) when the day number is beyond the range of dates.
+ *
+ * @example dateOfDayNumber(1) // '1970-01-02'
+ */
 export function dateOfDayNumber(day: number): string {
   return new Date(day * MS_PER_DAY).toISOString().slice(0, 10);
 }

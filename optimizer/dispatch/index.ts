@@ -23,3 +23,5 @@ export type {
 } from './combinations';
 export { buildSinglePointMilp, loadHighs, solveSinglePointMilp } from './milp';
 export type { LpSolver, MilpResult, SinglePointMilp } from './milp';
+export { operatingGuideline } from './guideline';
+export type { GuidelineAlternative, GuidelineBand, GuidelineGap, GuidelineOptions, OperatingGuideline } from './guideline';

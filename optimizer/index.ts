@@ -1,2 +1,6 @@
 // The optimizer's only public face. Pure computation: no I/O, no project imports outside optimizer/.
-export {};
+// Each folder's README.md states its methods, references and tolerances; optimizer/README.md indexes them.
+export * from './plant';
+export * from './random';
+export * from './fuel/index';
+export * from './logs/index';

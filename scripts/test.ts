@@ -17,7 +17,9 @@ import { ensureCluster, ensureDatabase, freePort, stopCluster } from './lib/post
 import { buildClient, runBin } from './lib/run';
 
 const TMP = path.join(ROOT, '.tmp');
-const CLUSTER_DIR = path.join(TMP, 'pg-test');
+// KILOWATCH_TEST_TAG gives a run its own cluster folder, so several runs can share one checkout.
+const TAG = (process.env.KILOWATCH_TEST_TAG ?? '').replace(/[^a-z0-9-]/gi, '');
+const CLUSTER_DIR = path.join(TMP, TAG ? `pg-test-${TAG}` : 'pg-test');
 const TEMPLATE_DB = 'kilowatch_template';
 
 interface Counts {
@@ -93,7 +95,7 @@ async function main(): Promise<number> {
       KILOWATCH_TEST_TEMPLATE: TEMPLATE_DB,
     };
 
-    const mainReport = path.join(TMP, 'vitest-main.json');
+    const mainReport = path.join(TMP, `vitest-main${TAG ? `-${TAG}` : ''}.json`);
     rmSync(mainReport, { force: true });
     console.log('[test] unit and API integration tests');
     await runBin('vitest', ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${mainReport}`, ...passThrough], { env });
@@ -130,7 +132,7 @@ async function main(): Promise<number> {
       });
       const baseUrl = `http://127.0.0.1:${port}`;
       await waitForHealth(baseUrl, 60_000);
-      const e2eReport = path.join(TMP, 'vitest-e2e.json');
+      const e2eReport = path.join(TMP, `vitest-e2e${TAG ? `-${TAG}` : ''}.json`);
       rmSync(e2eReport, { force: true });
       console.log('[test] browser tests (playwright-core + Debian chromium)');
       await runBin('vitest', ['run', '--config', 'vitest.e2e.config.ts', '--reporter=default', '--reporter=json', `--outputFile.json=${e2eReport}`], {

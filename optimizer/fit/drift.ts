@@ -7,7 +7,8 @@
  * with the post-overhaul baseline by a one-sided Welch interval (Welch, Biometrika 34, 1947).
  */
 import { fitFuelCurve, sfocAt, type DailyFuelPoint, type FitFuelCurveOptions, type FuelCurveFit } from './fuel-curve-fit';
-import { polynomialLeastSquares } from './least-squares';
+import type { RobustMethod } from './robust';
+import { robustPolynomialLeastSquares } from './robust-fit';
 import { studentTQuantile } from './student-t';
 
 export interface FitDriftOptions {
@@ -30,6 +31,8 @@ export interface FitDriftOptions {
   confidence?: number;
   /** Two-sided level of the slope interval; default 0.95. */
   level?: number;
+  /** Robust weighting of the per-point drift regression; default 'huber'. */
+  robust?: RobustMethod;
 }
 
 export interface DriftWindow {
@@ -62,6 +65,7 @@ export interface DriftResult {
   dof: number;
   windows: DriftWindow[];
   baseline: DriftWindow | null;
+  /** The days of the last windowHours of running hours (a trailing window, not aligned to `windows`). */
   latest: DriftWindow | null;
   excessGPerKwh: number | null;
   /** One-sided lower confidence bound of the excess of the latest window over the baseline. */
@@ -105,11 +109,12 @@ function summarise(rows: { h: number; s: number; w: number }[], fromHours: numbe
 /**
  * SFOC drift at a reference load against running hours since overhaul, with an alert on the latest window.
  *
- * Method: shape-corrected daily SFOC at the reference load; weighted least squares (hours run × robust weight
- * of the internal curve fit) of that SFOC on hours since overhaul by polynomialLeastSquares; slope interval
- * ± t_{(1+level)/2, n−2}·SE. Windows of `windowHours`; baseline = days below `baselineHours`; alert when the
- * one-sided lower bound (Welch–Satterthwaite dof) of latest − baseline exceeds the threshold. Only the current
- * overhaul cycle is used: the points after the last fall of hoursSinceOverhaul (in date order when every point
+ * Method: shape-corrected daily SFOC at the reference load, regressed on hours since overhaul by robust
+ * weighted least squares (robustPolynomialLeastSquares, Huber by default, weights = hours run); slope interval
+ * ± t_{(1+level)/2, n−2}·SE. Windows of `windowHours` for display; baseline = days below `baselineHours`;
+ * latest = the days of the last `windowHours` of running hours; alert when the one-sided lower confidence
+ * bound (Welch–Satterthwaite dof) of latest − baseline exceeds the threshold. Only the current overhaul cycle
+ * is used: the points after the last fall of hoursSinceOverhaul (in date order when every point
  * has a date, else input order). Cost: one curve fit plus O(n log n).
  * Throws when ratedKw ≤ 0, options are out of range, or fewer than 3 days of the cycle have load and hours.
  *
@@ -144,19 +149,14 @@ export function fitDrift(points: DailyFuelPoint[], options: FitDriftOptions): Dr
   if (cycle.length < 3) throw new Error('fitDrift requires at least 3 days with load and hoursSinceOverhaul');
   const cyclePoints = cycle.map((i) => points[i]);
 
-  let shape = options.shape;
-  let robustW: number[] = cycle.map(() => 1);
-  if (!shape) {
-    const fit = fitFuelCurve(cyclePoints, { ...options.fitOptions, ratedKw });
-    shape = fit;
-    robustW = fit.robustWeights;
-  }
+  // The shape fit's robust weights are not reused: it ignores drift, so it would down-weight the late days.
+  const shape = options.shape ?? fitFuelCurve(cyclePoints, { ...options.fitOptions, ratedKw });
   const refSfoc = sfocAt(shape, referenceLoadKw);
   const rows = cyclePoints.map((p, k) => ({
     index: cycle[k],
     h: p.hoursSinceOverhaul!,
     s: (1000 * p.fuelKgPerH) / p.loadKw - sfocAt(shape, p.loadKw) + refSfoc,
-    w: p.hoursRun * robustW[k],
+    w: p.hoursRun,
   }));
 
   // Windows of running hours.
@@ -185,15 +185,21 @@ export function fitDrift(points: DailyFuelPoint[], options: FitDriftOptions): Dr
     ys = usable.map((w) => w.sfocGPerKwh);
     ws = usable.map((w) => 1 / w.standardErrorGPerKwh ** 2);
   }
-  const reg = polynomialLeastSquares(xs, ys, { powers: [0, 1], weights: ws });
-  const slope = reg.coefficients[1];
+  const reg =
+    method === 'per-point'
+      ? robustPolynomialLeastSquares(xs, ys, { powers: [0, 1], weights: ws, robust: options.robust ?? 'huber' })
+      : robustPolynomialLeastSquares(xs, ys, { powers: [0, 1], weights: ws, robust: 'none' });
+  const slope = reg.fit.coefficients[1];
   const slopeSe = reg.standardErrors[1];
-  const tSlope = reg.dof > 0 ? studentTQuantile((1 + level) / 2, reg.dof) : NaN;
+  const dof = reg.fit.dof;
+  const tSlope = dof > 0 ? studentTQuantile((1 + level) / 2, dof) : NaN;
 
   // Alert: latest window against the baseline.
   const baseRows = rows.filter((r) => r.h < baselineHours);
   const baseline = baseRows.length > 0 ? summarise(baseRows, 0, baselineHours) : null;
-  const latest = windows[windows.length - 1] ?? null;
+  const lastHours = Math.max(...rows.map((r) => r.h));
+  const latestRows = rows.filter((r) => r.h > lastHours - windowHours);
+  const latest = summarise(latestRows, lastHours - windowHours, lastHours);
   let excess: number | null = null;
   let lowerBound: number | null = null;
   let threshold: number | null = null;
@@ -222,8 +228,8 @@ export function fitDrift(points: DailyFuelPoint[], options: FitDriftOptions): Dr
     slopeGPerKwhPer1000h: slope,
     slopeStandardError: slopeSe,
     slopeInterval: { lower: slope - tSlope * slopeSe, upper: slope + tSlope * slopeSe, level },
-    interceptGPerKwh: reg.coefficients[0],
-    dof: reg.dof,
+    interceptGPerKwh: reg.fit.coefficients[0],
+    dof,
     windows,
     baseline,
     latest,

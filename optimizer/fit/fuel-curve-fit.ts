@@ -8,8 +8,8 @@
  * polynomialLeastSquares (QR on a centred, scaled load).
  */
 import { curveFuelKgPerH, type QuadraticFuelCurve } from '../plant';
-import { boundedPolynomialLeastSquares, polynomialLeastSquares, type LeastSquaresResult } from './least-squares';
-import { HUBER_K, TUKEY_C, robustPsiDerivative, robustScale, robustWeight, type RobustMethod } from './robust';
+import { HUBER_K, TUKEY_C, type RobustMethod } from './robust';
+import { robustPolynomialLeastSquares } from './robust-fit';
 import { studentTQuantile } from './student-t';
 
 /** One day of one set: average load while running and the fuel rate corrected to ISO LCV. */
@@ -105,7 +105,7 @@ export interface FuelCurveFit {
   /** Coefficients held at 0 by their bound. */
   activeConstraints: ('a' | 'c')[];
   rSquared: number;
-  /** Residual SD of a day of average running hours, kg/h. NaN when dof = 0. */
+  /** Residual SD of a day of average running hours, kg/h (robust fits: normalised MAD). NaN when dof = 0. */
   residualSdKgPerH: number;
   dof: number;
   /** Days with load that entered the fit. */
@@ -161,8 +161,8 @@ function checkFinite(value: number, what: string): void {
  * Huber to convergence first, then bisquare c = 4.685. Down-weighted days stay in the fit with their weight
  * and are listed in `outliers`. When days < 30 or the load span < 20 % of rating and a shop test is given,
  * its points enter as pseudo-observations of total weight equivalentDays · 30 / (30 + days) average days.
- * Standard errors come from the final weighted fit (robust weights treated as fixed; conditional on the
- * active set), with dof = observations (days + shop points) − free coefficients.
+ * Standard errors: Huber's M-estimate covariance for robust fits (robustPolynomialLeastSquares), the weighted
+ * fit's σ̂²(XᵀWX)⁻¹ otherwise; conditional on the active set; dof = days + shop points − free coefficients.
  * Cost: O(n) per IRLS iteration and face (≤ 4 faces), typically 5–20 iterations.
  * Throws on non-finite or negative inputs, ratedKw ≤ 0, fewer than 3 days with load, or too few distinct loads.
  *
@@ -250,63 +250,22 @@ export function fitFuelCurve(points: DailyFuelPoint[], options: FitFuelCurveOpti
     throw new Error(`fitFuelCurve requires at least ${powers.length} distinct loads (days or shop-test points)`);
   }
 
-  const solve = (weights: number[]): LeastSquaresResult & { activeAtZero: number[] } =>
-    constrained
-      ? boundedPolynomialLeastSquares(x, y, { powers, weights, nonNegative: powers.filter((q) => q !== 1) })
-      : { ...polynomialLeastSquares(x, y, { powers, weights }), activeAtZero: [] };
-
-  // IRLS. Shop-test points keep robust weight 1 and do not enter the scale.
-  const u = new Array<number>(nObs).fill(1);
-  const w = baseW.slice();
-  let res = solve(w);
-  let iterations = 0;
-  let converged = robust === 'none';
-  let scale = NaN;
-  const stages: { method: RobustMethod; k: number }[] =
-    robust === 'none' ? [] : robust === 'huber' ? [{ method: 'huber', k: tuning! }] : [{ method: 'huber', k: HUBER_K }, { method: 'tukey', k: tuning! }];
-  const yScale = Math.max(...y.map(Math.abs));
-  for (const stage of stages) {
-    converged = false;
-    for (let it = 0; it < maxIterations; it++) {
-      iterations++;
-      const scaled: number[] = [];
-      for (let j = 0; j < nDays; j++) scaled.push(res.residuals[j] * Math.sqrt(baseW[j]));
-      scale = robustScale(scaled);
-      if (!(scale > 1e-12 * yScale)) {
-        converged = true; // (near-)exact fit: nothing to down-weight
-        u.fill(1);
-        break;
-      }
-      let change = 0;
-      for (let j = 0; j < nDays; j++) {
-        const next = robustWeight(scaled[j] / scale, stage.method, stage.k);
-        change = Math.max(change, Math.abs(next - u[j]));
-        u[j] = next;
-        w[j] = baseW[j] * next;
-      }
-      res = solve(w);
-      if (change < 1e-6) {
-        converged = true;
-        break;
-      }
-    }
-  }
-  if (!converged) warnings.push(`robust iterations did not converge in ${maxIterations} steps`);
-
+  // IRLS. Shop-test points (after the days) keep robust weight 1 and do not enter the scale.
+  const irls = robustPolynomialLeastSquares(x, y, {
+    powers,
+    weights: baseW,
+    nonNegative: constrained ? powers.filter((q) => q !== 1) : [],
+    robust,
+    tuning: tuning ?? undefined,
+    robustCount: nDays,
+    maxIterations,
+  });
+  const res = irls.fit;
+  const u = irls.robustWeights;
+  const w = irls.finalWeights;
+  if (!irls.converged) warnings.push(`robust iterations did not converge in ${maxIterations} steps`);
   const [a, b, c] = [res.coefficients[0], res.coefficients[1], res.coefficients[2] ?? 0];
-  let cov3 = [0, 1, 2].map((i) => [0, 1, 2].map((j) => res.covariance[i]?.[j] ?? 0));
-  let residualSd = res.residualSd;
-  const finalStage = stages[stages.length - 1];
-  if (finalStage && scale > 1e-12 * yScale && res.dof > 0) {
-    const free = powers.filter((q) => !res.activeAtZero.includes(q));
-    const corrected = huberCovariance(res.residuals, baseW, nDays, free.length, scale, finalStage, () =>
-      polynomialLeastSquares(x, y, { powers: free, weights: baseW }),
-    );
-    if (corrected) {
-      cov3 = corrected;
-      residualSd = scale;
-    }
-  }
+  const cov3 = [0, 1, 2].map((i) => [0, 1, 2].map((j) => irls.covariance[i]?.[j] ?? 0));
   const curve: QuadraticFuelCurve = { kind: 'quadratic', a, b, c };
 
   const effectiveWeights = new Array<number>(points.length).fill(0);
@@ -324,7 +283,7 @@ export function fitFuelCurve(points: DailyFuelPoint[], options: FitFuelCurveOpti
         loadKw: points[i].loadKw,
         fuelKgPerH: points[i].fuelKgPerH,
         residualKgPerH: res.residuals[j],
-        standardizedResidual: (res.residuals[j] * Math.sqrt(baseW[j])) / scale,
+        standardizedResidual: irls.standardizedResiduals[j],
         robustWeight: u[j],
       });
     }
@@ -352,7 +311,7 @@ export function fitFuelCurve(points: DailyFuelPoint[], options: FitFuelCurveOpti
     standardErrors: { a: Math.sqrt(cov3[0][0]), b: Math.sqrt(cov3[1][1]), c: Math.sqrt(cov3[2][2]) },
     activeConstraints: res.activeAtZero.map((q) => (q === 0 ? 'a' : 'c')),
     rSquared: res.rSquared,
-    residualSdKgPerH: residualSd,
+    residualSdKgPerH: irls.residualSd,
     days: nDays,
     loadSpanPct,
     effectiveWeights,
@@ -360,8 +319,8 @@ export function fitFuelCurve(points: DailyFuelPoint[], options: FitFuelCurveOpti
     outliers,
     robust,
     robustTuning: tuning,
-    iterations,
-    converged,
+    iterations: irls.iterations,
+    converged: irls.converged,
     priorUsed,
     priorWeightDays,
     priorWeightShare: priorW / totalW,
@@ -369,42 +328,6 @@ export function fitFuelCurve(points: DailyFuelPoint[], options: FitFuelCurveOpti
     atLoads,
     warnings,
   };
-}
-
-/**
- * Huber's covariance of an M-estimate (Huber & Ronchetti, Robust Statistics, §7.6, eq. 7.84 with the
- * correction factor K = 1 + (p/n)·Var(ψ')/E(ψ')²): K²·[Σψ²/(n−p)]/[Σψ'/n]²·σ̂²·(XᵀWX)⁻¹, W the hours weights.
- * ψ is summed over the days only; the unit (XᵀWX)⁻¹ comes from a fit on the same face with the base weights.
- * Returns null when no day lies inside the ψ' support (then the reweighted fit's covariance stands).
- */
-function huberCovariance(
-  residuals: number[],
-  baseW: number[],
-  nDays: number,
-  p: number,
-  scale: number,
-  stage: { method: RobustMethod; k: number },
-  baseFit: () => LeastSquaresResult,
-): number[][] | null {
-  let sumPsi2 = 0;
-  let sumD = 0;
-  let sumD2 = 0;
-  for (let j = 0; j < nDays; j++) {
-    const z = (residuals[j] * Math.sqrt(baseW[j])) / scale;
-    const psi = z * robustWeight(z, stage.method, stage.k);
-    const d = robustPsiDerivative(z, stage.method, stage.k);
-    sumPsi2 += psi * psi;
-    sumD += d;
-    sumD2 += d * d;
-  }
-  const base = baseFit();
-  const meanD = sumD / nDays;
-  if (!(meanD > 0) || !(base.residualSd > 0) || nDays <= p) return null;
-  const varD = sumD2 / nDays - meanD * meanD;
-  const kFactor = 1 + ((p / nDays) * varD) / (meanD * meanD);
-  const factor = (kFactor * kFactor * (sumPsi2 / (nDays - p))) / (meanD * meanD);
-  const unit = 1 / (base.residualSd * base.residualSd);
-  return [0, 1, 2].map((i) => [0, 1, 2].map((j) => (base.covariance[i]?.[j] ?? 0) * unit * factor * scale * scale));
 }
 
 /** What the evaluation functions need from a fit. */

@@ -24,6 +24,7 @@ export {
   type LeastSquaresResult,
   type BoundedLeastSquaresResult,
 } from './least-squares';
+export { robustPolynomialLeastSquares, type RobustLeastSquaresOptions, type RobustLeastSquaresResult } from './robust-fit';
 export { robustWeight, robustPsiDerivative, robustScale, HUBER_K, TUKEY_C, type RobustMethod } from './robust';
 export { studentTCdf, studentTQuantile, regularizedIncompleteBeta } from './student-t';
 export { generateDailyLogs, type SyntheticLogOptions } from './synthetic-logs';

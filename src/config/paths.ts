@@ -1,0 +1,23 @@
+// Every address of the client in one place. Pages link with `paths.x.href(...)`; the router uses `paths.x.pattern`.
+
+export const paths = {
+  signIn: {
+    pattern: '/sign-in',
+    href: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
+  },
+  forgotPassword: { pattern: '/forgot-password', href: () => '/forgot-password' },
+  resetPassword: { pattern: '/reset-password', href: () => '/reset-password' },
+  acceptInvitation: { pattern: '/accept-invitation', href: () => '/accept-invitation' },
+  fleet: { pattern: '/', href: () => '/' },
+  vessel: { pattern: '/vessels/:vesselId', href: (vesselId: string) => `/vessels/${encodeURIComponent(vesselId)}` },
+  adminUsers: { pattern: '/admin/users', href: () => '/admin/users' },
+  adminOutbox: { pattern: '/admin/outbox', href: () => '/admin/outbox' },
+  adminSettings: { pattern: '/admin/settings', href: () => '/admin/settings' },
+  audit: { pattern: '/audit', href: () => '/audit' },
+} as const;
+
+/** Accepts a `next` parameter only when it is a path on this site (no scheme, no protocol-relative host). */
+export function safeNextPath(next: string | null | undefined): string {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) return paths.fleet.href();
+  return next;
+}

@@ -1,0 +1,19 @@
+import '@fontsource/nunito-sans/400.css';
+import '@fontsource/nunito-sans/600.css';
+import '@fontsource/nunito-sans/700.css';
+import './index.css';
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { AppProvider } from './app/provider';
+import { AppRouter } from './app/router';
+
+const root = document.getElementById('root');
+if (!root) throw new Error('Kilowatch needs an element with id "root" in index.html');
+
+createRoot(root).render(
+  <StrictMode>
+    <AppProvider>
+      <AppRouter />
+    </AppProvider>
+  </StrictMode>,
+);

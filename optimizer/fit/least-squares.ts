@@ -90,21 +90,21 @@ export function polynomialLeastSquares(x: number[], y: number[], options: LeastS
   for (let i = 0; i < n; i++) if (w[i] > 0) s = Math.max(s, Math.abs(x[i] - m));
   if (!(s > 0)) throw new Error('polynomialLeastSquares requires at least two distinct x values');
 
-  // Design in z = (x − m) / s, rows scaled by √w.
+  // Augmented design [√W·Z | √W·y] in z = (x − m) / s. Its QR gives R (top-left p×p) and Qᵀ√W·y (top of the
+  // last column) at once, so the tall Q is never applied (Golub & Van Loan §5.3.3 — from memory).
   const z = new Float64Array(n);
-  const rows: number[][] = [];
-  const rhs: number[][] = [];
-  const rowIndex: number[] = [];
+  for (let i = 0; i < n; i++) z[i] = (x[i] - m) / s;
+  const aug = new Matrix(used, p + 1);
+  let row = 0;
   for (let i = 0; i < n; i++) {
-    z[i] = (x[i] - m) / s;
     if (w[i] === 0) continue;
     const sw = Math.sqrt(w[i]);
-    rows.push(powers.map((q) => sw * z[i] ** q));
-    rhs.push([sw * y[i]]);
-    rowIndex.push(i);
+    for (let k = 0; k < p; k++) aug.set(row, k, sw * z[i] ** powers[k]);
+    aug.set(row, p, sw * y[i]);
+    row++;
   }
-  const qr = new QrDecomposition(new Matrix(rows));
-  const r = qr.upperTriangularMatrix;
+  const rAug = new QrDecomposition(aug).upperTriangularMatrix;
+  const r = rAug.subMatrix(0, p - 1, 0, p - 1);
   let maxDiag = 0;
   for (let k = 0; k < p; k++) maxDiag = Math.max(maxDiag, Math.abs(r.get(k, k)));
   for (let k = 0; k < p; k++) {
@@ -112,7 +112,8 @@ export function polynomialLeastSquares(x: number[], y: number[], options: LeastS
       throw new Error('polynomialLeastSquares: the design is rank deficient (too few distinct x for the powers)');
     }
   }
-  const alpha = qr.solve(new Matrix(rhs)).getColumn(0);
+  const rInv = inverse(r);
+  const alpha = rInv.mmul(rAug.subMatrix(0, p - 1, p, p)).getColumn(0);
 
   const fitted = new Array<number>(n);
   const residuals = new Array<number>(n);
@@ -133,7 +134,6 @@ export function polynomialLeastSquares(x: number[], y: number[], options: LeastS
   const sigma2 = dof > 0 ? rss / dof : NaN;
 
   // α-covariance (unit σ²): R⁻¹R⁻ᵀ. Map α → β with T[j][k] = C(q_k, j)(−m)^{q_k−j} / s^{q_k}.
-  const rInv = inverse(r.subMatrix(0, p - 1, 0, p - 1));
   const covAlpha = rInv.mmul(rInv.transpose());
   const t = Matrix.zeros(degree + 1, p);
   for (let k = 0; k < p; k++) {

@@ -80,7 +80,7 @@ function huberCovariance(
  * Robust weighted polynomial least squares by IRLS on MAD-scaled residuals.
  *
  * Method: Huber & Ronchetti, Robust Statistics, §7.8 (IRLS): weights u(zᵢ) = ψ(zᵢ)/zᵢ with zᵢ = rᵢ√wᵢ / ŝ, ŝ the
- * normalised MAD, re-estimated every step; stop when no weight changes by more than 1e-6. 'tukey' first runs
+ * normalised MAD, re-estimated every step; stop when no weight changes by more than 1e-4. 'tukey' first runs
  * Huber to convergence (a redescending ψ needs a good start). Covariance: Huber's M-estimate covariance
  * (see huberCovariance above), conditional on the bounds' active set. An (almost) exact fit stops at once.
  * Cost: one (bounded) least-squares solve per iteration, typically 5–20 iterations.
@@ -142,7 +142,7 @@ export function robustPolynomialLeastSquares(x: number[], y: number[], options: 
         w[j] = baseW[j] * next;
       }
       fit = solve(w);
-      if (change < 1e-6) {
+      if (change < 1e-4) {
         converged = true;
         break;
       }

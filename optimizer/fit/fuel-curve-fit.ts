@@ -419,8 +419,9 @@ export function sfocBandAt(fit: FittedCurve, loadKw: number, level = 0.95): Sfoc
  * Bias of a fuel rate computed from the daily average load when the load varies within the day:
  * E[F(P)] − F(E[P]) = c·Var(P) for the quadratic curve (Jensen's inequality; exact for a quadratic).
  *
- * A fit to daily averages therefore reads the curve c·σ² kg/h low at the average load, where σ is the
- * within-day load SD. Cost: O(1). Throws when loadSdKw < 0.
+ * So a day's fuel computed as F(daily mean load) is c·σ² kg/h low, σ the within-day load SD; conversely a
+ * curve fitted to daily means absorbs the record's mean c·σ² into its intercept and reads that much high for a
+ * steady load (and tilts b, c when σ varies with load). Cost: O(1). Throws when loadSdKw < 0.
  *
  * @example withinDayFuelBiasKgPerH({ kind: 'quadratic', a: 20, b: 0.17, c: 5e-5 }, 100) // 0.5
  */

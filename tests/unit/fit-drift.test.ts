@@ -40,6 +40,21 @@ describe('per-point drift slope', () => {
   });
 });
 
+describe('drift with gross logging errors late in the cycle (truth of the simulation as reference)', () => {
+  it('robust slopes stay within 3 SE (Huber) and 1 SE (Tukey) of the clean slope; the plain one moves > 10 SE', () => {
+    const clean = generateDailyLogs(createRng(38), { curve: CURVE, ratedKw: RATED_KW, days: 365, driftGPerKwhPer1000h: 2 });
+    // A meter fault: every third day of the last 64 logged 40 % high (6 % of all days, a third of the late ones,
+    // where they have the most leverage on a slope).
+    const dirty = clean.map((p, i) => (i > 300 && i % 3 === 0 ? { ...p, fuelKgPerH: p.fuelKgPerH * 1.4 } : p));
+    const reference = fitDrift(clean, { ratedKw: RATED_KW, shape: { curve: CURVE }, robust: 'none' });
+    const se = reference.slopeStandardError;
+    const slope = (robust: 'huber' | 'tukey' | 'none') => fitDrift(dirty, { ratedKw: RATED_KW, robust }).slopeGPerKwhPer1000h;
+    expect(Math.abs(slope('huber') - reference.slopeGPerKwhPer1000h)).toBeLessThan(3 * se);
+    expect(Math.abs(slope('tukey') - reference.slopeGPerKwhPer1000h)).toBeLessThan(1 * se);
+    expect(Math.abs(slope('none') - reference.slopeGPerKwhPer1000h)).toBeGreaterThan(10 * se);
+  });
+});
+
 describe('windows and alert', () => {
   it('window mean and standard error with equal hours are the sample mean and s/√n (simple-statistics)', () => {
     const pts = generateDailyLogs(createRng(32), { curve: CURVE, ratedKw: RATED_KW, days: 120, minHoursRun: 24, maxHoursRun: 24 });

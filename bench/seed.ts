@@ -4,7 +4,8 @@
  * inside an outer transaction that is rolled back (median of 3 runs), so the database stays empty.
  */
 import { connect } from '../server/db/client';
-import { generateScenario, seedDemo } from './index';
+import { generateScenario, seedDemo } from '../seed/index';
+import { benchDatabase } from './_db';
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
@@ -21,7 +22,7 @@ async function main(): Promise<void> {
   console.log(`bench seed-generate-scenario ${median(generateMs).toFixed(0)} ms`);
   console.log(`bench seed-log-rows ${logRows} rows`);
 
-  const url = process.env.DATABASE_URL;
+  const url = process.env.DATABASE_URL ?? (await benchDatabase('seed'));
   if (!url) {
     console.log('(set DATABASE_URL to an empty, migrated database to time seedDemo as well)');
     return;

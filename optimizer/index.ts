@@ -4,3 +4,4 @@ export * from './plant';
 export * from './random';
 export * from './fuel/index';
 export * from './logs/index';
+export * from './fit/index';

@@ -201,6 +201,80 @@ export async function seedDemo(db: DbOrTx, options: SeedDemoOptions = {}): Promi
         shorePowerH: m.shorePowerH,
       })),
     );
+    rows.meter_replacements = await insertInBatches(
+      tx,
+      t.meterReplacements,
+      scenario.meterReplacements.map((r) => ({
+        gensetId: gensetIds.get(r.gensetKey) as string,
+        meter: r.meter,
+        replacedOn: r.date,
+        oldFinalReading: r.oldFinalReading,
+        newStartReading: r.newStartReading,
+        remarks: 'Energy meter replaced (demo scenario)',
+      })),
+    );
+    rows.maintenance_events = await insertInBatches(
+      tx,
+      t.maintenanceEvents,
+      scenario.overhaulEvents.map((e) => ({
+        gensetId: gensetIds.get(e.gensetKey) as string,
+        kind: e.kind,
+        doneOn: e.date,
+        runningHours: e.runningHours,
+        remarks: 'Recorded from the demo scenario',
+      })),
+    );
+    rows.operating_rules = await insertInBatches(
+      tx,
+      t.operatingRules,
+      scenario.vessels.flatMap((v) => demoOperatingRules(vesselIds.get(v.key) as string, v.busSections.length > 1)),
+    );
+    rows.fuel_prices = await insertInBatches(tx, t.fuelPrices, demoFuelPrices(companyId, scenario.firstDate));
+    rows.work_windows = await insertInBatches(
+      tx,
+      t.workWindows,
+      scenario.vessels.flatMap((v, i) => demoWorkWindows(vesselIds.get(v.key) as string, i, scenario.lastDate)),
+    );
   });
   return { companyId, rows };
+}
+
+/**
+ * Spinning-reserve rules per mode (invented demo settings, typical of common practice: more reserve and two sets
+ * with N-1 when manoeuvring, bus tie open when manoeuvring on a vessel with two sections).
+ */
+function demoOperatingRules(vesselId: string, twoSections: boolean) {
+  return [
+    { vesselId, mode: 'sea' as const, marginKw: 0, marginPct: 15, minSets: 1, nMinus1: false, busTieClosed: true },
+    { vesselId, mode: 'manoeuvring' as const, marginKw: 0, marginPct: 30, minSets: 2, nMinus1: true, busTieClosed: !twoSections },
+    { vesselId, mode: 'port' as const, marginKw: 0, marginPct: 10, minSets: 1, nMinus1: false, busTieClosed: true },
+    { vesselId, mode: 'anchorage' as const, marginKw: 0, marginPct: 20, minSets: 1, nMinus1: false, busTieClosed: true },
+  ];
+}
+
+/** Invented fuel prices (USD per tonne), two price periods per grade. */
+function demoFuelPrices(companyId: string, firstDate: string) {
+  const prices: Record<string, [number, number]> = { VLSFO: [612, 574], HFO: [468, 441], MGO: [768, 712] };
+  return Object.entries(prices).flatMap(([grade, [first, second]]) => [
+    { companyId, grade, pricePerT: first, validFrom: firstDate },
+    { companyId, grade, pricePerT: second, validFrom: '2025-11-01' },
+  ]);
+}
+
+/** Invented port calls and one dry dock after the log window, for the overhaul planner. */
+function demoWorkWindows(vesselId: string, index: number, lastDate: string) {
+  const base = new Date(`${lastDate}T00:00:00Z`).getTime();
+  const day = (n: number) => new Date(base + n * 86_400_000).toISOString().slice(0, 10);
+  const places = [
+    ['Port Aldermere', 'Skerry Harbour', 'Vantby Roads', 'Calder Quay'],
+    ['Saltmarsh Terminal', 'Port Aldermere', 'Holmwick', 'Ebbridge Yard'],
+    ['Skerry Harbour', 'Holmwick', 'Vantby Roads', 'Ebbridge Yard'],
+  ][index % 3];
+  const offset = 9 + index * 5;
+  return [
+    { vesselId, kind: 'port_call' as const, place: places[0], startsOn: day(offset), endsOn: day(offset + 2) },
+    { vesselId, kind: 'port_call' as const, place: places[1], startsOn: day(offset + 38), endsOn: day(offset + 40) },
+    { vesselId, kind: 'port_call' as const, place: places[2], startsOn: day(offset + 81), endsOn: day(offset + 83) },
+    { vesselId, kind: 'dry_dock' as const, place: places[3], startsOn: day(offset + 150), endsOn: day(offset + 171) },
+  ];
 }

@@ -161,11 +161,13 @@ export async function addBusSection(deps: AppDeps, actor: Actor, vesselId: strin
 }
 
 async function checkGenset(tx: DbOrTx, vesselId: string, input: ReturnType<typeof gensetInputSchema.parse>, gensetId: string | null) {
-  const [section] = await tx
-    .select()
-    .from(busSections)
-    .where(and(eq(busSections.id, input.busSectionId), eq(busSections.vesselId, vesselId)));
-  if (!section) throw new AppError('validation_failed', 'Choose a bus section of this vessel', [{ path: 'busSectionId', message: 'Not a bus section of this vessel' }]);
+  const [section] = input.busSectionId
+    ? await tx
+        .select()
+        .from(busSections)
+        .where(and(eq(busSections.id, input.busSectionId), eq(busSections.vesselId, vesselId)))
+    : [];
+  if (input.busSectionId && !section) throw new AppError('validation_failed', 'Choose a bus section of this vessel', [{ path: 'busSectionId', message: 'Not a bus section of this vessel' }]);
   const sameName = await tx
     .select({ id: gensets.id })
     .from(gensets)

@@ -31,7 +31,8 @@ export const maintenanceInputSchema = z.object({
 export const gensetInputSchema = z
   .object({
     designation: z.string().trim().min(1, 'Enter a designation such as DG1').max(20),
-    busSectionId: z.uuid('Choose a bus section'),
+    /** The main switchboard section a service set feeds; an emergency set feeds the emergency switchboard (null). */
+    busSectionId: z.uuid('Choose a bus section').nullable(),
     ratedKw: z.number({ message: 'Rated power must be a number' }).positive('Rated power must be above 0 kW').max(50_000),
     ratedKva: z.number().positive().max(60_000),
     voltageV: z.number().positive().max(15_000),
@@ -46,6 +47,7 @@ export const gensetInputSchema = z
     duty: z.enum(['service', 'emergency']).default('service'),
     maintenance: z.array(maintenanceInputSchema).default([]),
   })
+  .refine((g) => g.duty === 'emergency' || g.busSectionId !== null, { message: 'A service set feeds a bus section', path: ['busSectionId'] })
   .refine((g) => g.maxLoadPct > g.minLoadPct, { message: 'Maximum load must be above minimum load', path: ['maxLoadPct'] })
   .refine((g) => g.ratedKva >= g.ratedKw, { message: 'Rated kVA cannot be below rated kW (power factor ≤ 1)', path: ['ratedKva'] });
 export type GensetInput = z.input<typeof gensetInputSchema>;

@@ -15,9 +15,9 @@ export class ApiError extends Error {
     this.details = details;
   }
 
-  /** Field problems of a `validation_failed` answer (empty for any other error). */
+  /** Field problems the server named (`validation_failed`, or e.g. a `conflict` on one field); empty when none. */
   get fieldIssues(): FieldIssue[] {
-    if (this.code !== 'validation_failed' || !Array.isArray(this.details)) return [];
+    if (!Array.isArray(this.details)) return [];
     return this.details.filter(
       (d): d is FieldIssue => typeof d === 'object' && d !== null && typeof d.path === 'string' && typeof d.message === 'string',
     );

@@ -4,13 +4,15 @@ interface LogoMarkProps {
   className?: string;
   /** Accessible name; leave empty when a visible wordmark stands beside it. */
   title?: string;
+  /** 'light' on dark backgrounds: the plate turns a shade lighter so the mark keeps its edge. */
+  tone?: 'dark' | 'light';
 }
 
 /**
  * The Kilowatch mark: a half dial with the needle in the efficient band, over three short bars for the sets on
  * the switchboard. Drawn for Kilowatch; see docs/decisions/001-visual-identity.md.
  */
-export function LogoMark({ size = 32, className, title }: LogoMarkProps) {
+export function LogoMark({ size = 32, className, title, tone = 'dark' }: LogoMarkProps) {
   return (
     <svg
       xmlns="http://www.w3.org/2000/svg"
@@ -22,7 +24,7 @@ export function LogoMark({ size = 32, className, title }: LogoMarkProps) {
       aria-hidden={title ? undefined : true}
       aria-label={title}
     >
-      <rect width="32" height="32" rx="7" fill="#142226" />
+      <rect width="32" height="32" rx="7" fill={tone === 'light' ? '#28444a' : '#142226'} />
       <path d="M7 20a9 9 0 0 1 18 0" fill="none" stroke="#9bb7bb" strokeWidth="2.4" strokeLinecap="round" />
       <path d="M16 20 21.5 12.5" stroke="#dc9c2c" strokeWidth="2.6" strokeLinecap="round" />
       <circle cx="16" cy="20" r="2.2" fill="#dc9c2c" />
@@ -35,7 +37,7 @@ export function LogoMark({ size = 32, className, title }: LogoMarkProps) {
 export function Wordmark({ tone = 'dark' }: { tone?: 'dark' | 'light' }) {
   return (
     <span className="inline-flex items-center gap-2">
-      <LogoMark size={28} />
+      <LogoMark size={28} tone={tone} />
       <span className={`text-lead font-bold tracking-tight ${tone === 'light' ? 'text-hull-50' : 'text-hull-900'}`}>Kilowatch</span>
     </span>
   );

@@ -5,7 +5,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Field, Input } from '../../../components/ui/form-field';
 import { formatDateTime } from '../../../lib/format';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../lib/form-errors';
 import { useAcceptInvitation } from '../api/accept-invitation';
 
 interface Props {
@@ -18,15 +18,19 @@ export function AcceptInvitationForm({ token, preview, onAccepted }: Props) {
   const accept = useAcceptInvitation();
   const form = useForm({ resolver: zodResolver(acceptInvitationSchema), defaultValues: { token, name: '', password: '' } });
   const { errors } = form.formState;
-  const problem = accept.isError ? applyServerErrors(accept.error, form.setError, ['name', 'password']) : null;
+  const server = useServerErrors(form.setError, ['name', 'password']);
+  const submit = form.handleSubmit((values) => {
+    server.clear();
+    accept.mutate(values, { onSuccess: onAccepted, onError: server.onError });
+  });
 
   return (
-    <form onSubmit={form.handleSubmit((values) => accept.mutate(values, { onSuccess: onAccepted }))} noValidate className="flex flex-col gap-4" aria-label="Accept the invitation">
+    <form onSubmit={submit} noValidate className="flex flex-col gap-4" aria-label="Accept the invitation">
       <p className="text-small text-hull-700">
         <strong>{preview.companyName}</strong> invites <strong>{preview.email}</strong> to join as {ROLE_LABELS[preview.role].toLowerCase()}. The invitation
         is open until {formatDateTime(preview.expiresAt)}.
       </p>
-      {problem ? <Alert tone="error">{problem}</Alert> : null}
+      {server.problem ? <Alert tone="error">{server.problem}</Alert> : null}
       <Field label="Your name" htmlFor="accept-name" error={errors.name?.message}>
         <Input id="accept-name" autoComplete="name" invalid={!!errors.name} {...form.register('name')} />
       </Field>

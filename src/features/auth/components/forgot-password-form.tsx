@@ -4,13 +4,14 @@ import { forgotPasswordSchema } from '../../../../shared';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Field, Input } from '../../../components/ui/form-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../lib/form-errors';
 import { useRequestPasswordReset } from '../api/forgot-password';
 
 export function ForgotPasswordForm() {
   const request = useRequestPasswordReset();
   const form = useForm({ resolver: zodResolver(forgotPasswordSchema), defaultValues: { email: '' } });
   const { errors } = form.formState;
+  const server = useServerErrors(form.setError, ['email']);
 
   if (request.isSuccess) {
     return (
@@ -21,11 +22,13 @@ export function ForgotPasswordForm() {
     );
   }
 
-  const problem = request.isError ? applyServerErrors(request.error, form.setError, ['email']) : null;
 
   return (
-    <form onSubmit={form.handleSubmit((values) => request.mutate(values))} noValidate className="flex flex-col gap-4" aria-label="Request a password reset">
-      {problem ? <Alert tone="error">{problem}</Alert> : null}
+    <form onSubmit={form.handleSubmit((values) => {
+        server.clear();
+        request.mutate(values, { onError: server.onError });
+      })} noValidate className="flex flex-col gap-4" aria-label="Request a password reset">
+      {server.problem ? <Alert tone="error">{server.problem}</Alert> : null}
       <Field label="E-mail address" htmlFor="forgot-email" error={errors.email?.message}>
         <Input id="forgot-email" type="email" autoComplete="username" invalid={!!errors.email} {...form.register('email')} />
       </Field>

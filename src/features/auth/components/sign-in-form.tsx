@@ -7,7 +7,7 @@ import { Button } from '../../../components/ui/button';
 import { Field, Input } from '../../../components/ui/form-field';
 import { paths } from '../../../config/paths';
 import { isApiError } from '../../../lib/api-client';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../lib/form-errors';
 import { useSignIn } from '../api/sign-in';
 
 export function SignInForm({ onSignedIn }: { onSignedIn: (me: Me) => void }) {
@@ -15,18 +15,20 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (me: Me) => void }) {
   const form = useForm({ resolver: zodResolver(signInSchema), defaultValues: { email: '', password: '' } });
   const { errors } = form.formState;
 
-  const problem = (() => {
-    if (!signIn.isError) return null;
-    if (isApiError(signIn.error, 401)) return 'The e-mail address or the password is wrong.';
-    if (isApiError(signIn.error, 429)) return `${signIn.error.message} Wait a few minutes before trying again.`;
-    return applyServerErrors(signIn.error, form.setError, ['email', 'password']);
-  })();
+  const server = useServerErrors(form.setError, ['email', 'password'], (error) => {
+    if (isApiError(error, 401)) return 'The e-mail address or the password is wrong.';
+    if (isApiError(error, 429)) return `${error.message} Wait a few minutes before trying again.`;
+    return null;
+  });
 
-  const submit = form.handleSubmit((values) => signIn.mutate(values, { onSuccess: onSignedIn }));
+  const submit = form.handleSubmit((values) => {
+    server.clear();
+    signIn.mutate(values, { onSuccess: onSignedIn, onError: server.onError });
+  });
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4" aria-label="Sign in">
-      {problem ? <Alert tone="error">{problem}</Alert> : null}
+      {server.problem ? <Alert tone="error">{server.problem}</Alert> : null}
       <Field label="E-mail address" htmlFor="sign-in-email" error={errors.email?.message}>
         <Input id="sign-in-email" type="email" autoComplete="username" invalid={!!errors.email} {...form.register('email')} />
       </Field>

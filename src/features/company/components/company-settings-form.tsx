@@ -4,27 +4,29 @@ import { companySettingsSchema, type CompanySettings } from '../../../../shared'
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Field, Input } from '../../../components/ui/form-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../lib/form-errors';
 import { useUpdateCompany } from '../api/update-company';
 
 export function CompanySettingsForm({ settings, onSaved }: { settings: CompanySettings; onSaved?: () => void }) {
   const update = useUpdateCompany();
   const form = useForm({ resolver: zodResolver(companySettingsSchema), defaultValues: settings });
   const { errors, isDirty } = form.formState;
-  const problem = update.isError ? applyServerErrors(update.error, form.setError, ['name', 'currency']) : null;
+  const server = useServerErrors(form.setError, ['name', 'currency']);
 
-  const submit = form.handleSubmit((values) =>
+  const submit = form.handleSubmit((values) => {
+    server.clear();
     update.mutate(values, {
       onSuccess: () => {
         form.reset(values);
         onSaved?.();
       },
-    }),
-  );
+      onError: server.onError,
+    });
+  });
 
   return (
     <form onSubmit={submit} noValidate className="flex max-w-form flex-col gap-4" aria-label="Company settings" data-form="company">
-      {problem ? <Alert tone="error">{problem}</Alert> : null}
+      {server.problem ? <Alert tone="error">{server.problem}</Alert> : null}
       {update.isSuccess && !isDirty ? <Alert tone="success">Settings saved.</Alert> : null}
       <Field label="Company name" htmlFor="company-name" error={errors.name?.message}>
         <Input id="company-name" invalid={!!errors.name} {...form.register('name')} />

@@ -5,7 +5,7 @@ import { createInvitationSchema, type CreateInvitationInput } from '../../../../
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Field, Input, Select } from '../../../components/ui/form-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../lib/form-errors';
 import { useCreateInvitation } from '../api/create-invitation';
 import { RoleOptions, VesselScopeField, withVesselScope, type VesselOption } from './membership-fields';
 
@@ -18,15 +18,16 @@ export function InviteForm({ vessels }: { vessels: VesselOption[] }) {
   });
   const { errors } = form.formState;
   const role = form.watch('role');
-  const problem = create.isError ? applyServerErrors(create.error, form.setError, ['email', 'role', 'vesselIds']) : null;
+  const server = useServerErrors(form.setError, ['email', 'role', 'vesselIds']);
 
   const submit = form.handleSubmit((input) => {
-    create.mutate(withVesselScope(input), { onSuccess: () => form.reset({ email: '', role: input.role, vesselIds: [] }) });
+    server.clear();
+    create.mutate(withVesselScope(input), { onSuccess: () => form.reset({ email: '', role: input.role, vesselIds: [] }), onError: server.onError });
   });
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4" aria-label="Invite a person" data-form="invite">
-      {problem ? <Alert tone="error">{problem}</Alert> : null}
+      {server.problem ? <Alert tone="error">{server.problem}</Alert> : null}
       {create.isSuccess ? <Alert tone="success">Invitation to {create.data.email} created; the e-mail is in the outbox.</Alert> : null}
       <div className="grid gap-4 sm:grid-cols-2">
         <Field label="E-mail address" htmlFor="invite-email" error={errors.email?.message}>

@@ -11,7 +11,7 @@ import { Field, Select } from '../../../components/ui/form-field';
 import { Table, Td, Th } from '../../../components/ui/table';
 import { errorMessage } from '../../../lib/api-client';
 import { formatDate } from '../../../lib/format';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../lib/form-errors';
 import { useDeleteMember } from '../api/delete-member';
 import { useUpdateMember } from '../api/update-member';
 import { RoleOptions, VesselScopeField, withVesselScope, type VesselOption } from './membership-fields';
@@ -23,14 +23,15 @@ function RoleEditor({ member, vessels, onClose }: { member: Member; vessels: Ves
     defaultValues: { role: member.role, vesselIds: member.vesselIds ?? [] },
   });
   const role = form.watch('role');
-  const problem = update.isError ? applyServerErrors(update.error, form.setError, ['role', 'vesselIds']) : null;
+  const server = useServerErrors(form.setError, ['role', 'vesselIds']);
   const submit = form.handleSubmit((input) => {
-    update.mutate({ membershipId: member.membershipId, input: withVesselScope(input) }, { onSuccess: onClose });
+    server.clear();
+    update.mutate({ membershipId: member.membershipId, input: withVesselScope(input) }, { onSuccess: onClose, onError: server.onError });
   });
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-3 rounded-plate bg-deck-50 p-3" aria-label={`Change the role of ${member.name}`}>
-      {problem ? <Alert tone="error">{problem}</Alert> : null}
+      {server.problem ? <Alert tone="error">{server.problem}</Alert> : null}
       <Field label="Role" htmlFor={`role-${member.membershipId}`} error={form.formState.errors.role?.message} className="max-w-xs">
         <Select id={`role-${member.membershipId}`} {...form.register('role')}>
           <RoleOptions />

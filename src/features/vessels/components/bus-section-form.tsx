@@ -22,7 +22,11 @@ export function BusSectionForm({ vesselId }: { vesselId: string }) {
       { vesselId, name: trimmed },
       {
         onSuccess: () => setName(''),
-        onError: (e) => setError(applyServerErrors(e, () => undefined, []) ?? undefined),
+        onError: (e) => {
+          let onField: string | undefined;
+          const rest = applyServerErrors(e, (_name, issue) => (onField = issue.message), ['name']);
+          setError(rest ?? onField);
+        },
       },
     );
   };

@@ -5,7 +5,7 @@ import { gensetInputSchema, type Genset, type GensetInput } from '../../../../sh
 import { Alert } from '../../../components/ui/alert';
 import { FormActions } from '../../../components/ui/form-actions';
 import { Field, Input, Select } from '../../../components/ui/form-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../lib/form-errors';
 import { numberFieldMessages, toNumber, toNumberOrNull } from '../../../lib/number-fields';
 import { useCreateGenset } from '../api/create-genset';
 import { useUpdateGenset } from '../api/update-genset';
@@ -94,6 +94,7 @@ export function GensetForm({ vesselId, busSections, genset, onDone, onCancel }: 
     defaultValues: defaultsFor(genset, busSections),
   });
   const { errors } = form.formState;
+  const server = useServerErrors(form.setError, FIELD_NAMES);
   const idFor = (name: string) => `genset-${name.replace('.', '-')}`;
   // A plain function, not a component: a component declared here would remount its input on every render.
   const numberField = (name: NumberFieldName, label: string, unit: string, hint?: string) => (
@@ -103,15 +104,15 @@ export function GensetForm({ vesselId, busSections, genset, onDone, onCancel }: 
   );
 
   const submit = form.handleSubmit((input) => {
-    const onSuccess = () => onDone();
-    if (genset) update.mutate({ vesselId, gensetId: genset.id, input }, { onSuccess });
-    else create.mutate({ vesselId, input }, { onSuccess });
+    const callbacks = { onSuccess: () => onDone(), onError: server.onError };
+    server.clear();
+    if (genset) update.mutate({ vesselId, gensetId: genset.id, input }, callbacks);
+    else create.mutate({ vesselId, input }, callbacks);
   });
-  const problem = mutation.isError ? applyServerErrors(mutation.error, form.setError, FIELD_NAMES) : null;
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-6" aria-label={genset ? `Edit ${genset.designation}` : 'Add a set'} data-form="genset">
-      {problem ? <Alert tone="error">{problem}</Alert> : null}
+      {server.problem ? <Alert tone="error">{server.problem}</Alert> : null}
 
       <fieldset className="grid gap-4 sm:grid-cols-3">
         <legend className="mb-2 text-small font-bold uppercase text-hull-500">Identity</legend>

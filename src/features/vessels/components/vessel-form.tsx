@@ -5,7 +5,7 @@ import { FUEL_GRADES, VESSEL_TYPES, vesselInputSchema, type VesselDetail, type V
 import { Alert } from '../../../components/ui/alert';
 import { FormActions } from '../../../components/ui/form-actions';
 import { Field, Input, Select } from '../../../components/ui/form-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { useServerErrors } from '../../../lib/form-errors';
 import { useCreateVessel } from '../api/create-vessel';
 import { useUpdateVessel } from '../api/update-vessel';
 
@@ -43,16 +43,17 @@ export function VesselForm({ vessel, onDone, onCancel }: VesselFormProps) {
       : { name: '', imoNumber: '', vesselType: VESSEL_TYPES[0], fuelGrades: [], busSections: ['A'] },
   });
   const { errors } = form.formState;
+  const server = useServerErrors(form.setError, FIELD_NAMES);
 
   const submit = form.handleSubmit(({ busSections, ...fields }) => {
-    if (vessel) update.mutate({ vesselId: vessel.id, changes: fields }, { onSuccess: () => onDone(vessel.id) });
-    else create.mutate({ ...fields, busSections }, { onSuccess: (created) => onDone(created.id) });
+    server.clear();
+    if (vessel) update.mutate({ vesselId: vessel.id, changes: fields }, { onSuccess: () => onDone(vessel.id), onError: server.onError });
+    else create.mutate({ ...fields, busSections }, { onSuccess: (created) => onDone(created.id), onError: server.onError });
   });
-  const problem = mutation.isError ? applyServerErrors(mutation.error, form.setError, FIELD_NAMES) : null;
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-4" aria-label={vessel ? `Edit ${vessel.name}` : 'Add a vessel'} data-form="vessel">
-      {problem ? <Alert tone="error">{problem}</Alert> : null}
+      {server.problem ? <Alert tone="error">{server.problem}</Alert> : null}
       <div className="grid gap-4 sm:grid-cols-3">
         <Field label="Vessel name" htmlFor="vessel-name" error={errors.name?.message}>
           <Input id="vessel-name" invalid={!!errors.name} {...form.register('name')} />

@@ -10,6 +10,7 @@ import { authRouter } from './routes/auth';
 import { companyRouter } from './routes/company';
 import { membersRouter } from './routes/members';
 import { vesselsRouter } from './routes/vessels';
+import { logsRouter } from './routes/logs';
 
 /**
  * Builds the Express app: middleware -> routers -> errors. It never listens; server/index.ts does, and tests drive
@@ -43,6 +44,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(sessionMiddleware(deps));
   api.use('/auth', authRouter(deps));
   api.use('/vessels', vesselsRouter(deps));
+  api.use('/vessels', logsRouter(deps));
   api.use(membersRouter(deps));
   api.use(companyRouter(deps));
   api.use(notFoundApi);

@@ -5,3 +5,4 @@ export * from './limits';
 export * from './schemas/auth';
 export * from './schemas/users';
 export * from './schemas/vessels';
+export * from './schemas/logs';

@@ -74,9 +74,10 @@ export function deltaInterval(
 /**
  * Sampler of the multivariate normal N(mean, covariance): x = mean + L·z with z standard normal and L·Lᵀ = Σ.
  *
- * L is the Cholesky factor (ml-matrix) when Σ is positive definite; a covariance that is only semi-definite (a
- * coefficient held at its bound has zero variance) is factored as V·√Λ from its symmetric eigen-decomposition
- * (ml-matrix), negative round-off eigenvalues set to 0. Reference: Gentle, Random Number Generation and Monte
+ * L = D·L_R with D the standard deviations and L_R the Cholesky factor (ml-matrix) of the correlation matrix when
+ * that is positive definite; a correlation matrix that is only semi-definite (a coefficient held at its bound has
+ * zero variance) is factored as V·√Λ from its symmetric eigen-decomposition (ml-matrix), round-off eigenvalues
+ * above −1e-9 set to 0. Reference: Gentle, Random Number Generation and Monte
  * Carlo Methods, 2nd ed., §5.3.1 (multivariate normal by a square-root factor of Σ).
  *
  * Cost: O(d³) once, O(d²) per draw. Throws when the covariance is not square of the mean's size, not symmetric,
@@ -89,25 +90,36 @@ export function multivariateNormalSampler(mean: number[], covariance: number[][]
   if (covariance.length !== d || covariance.some((row) => row.length !== d)) {
     throw new Error('multivariateNormalSampler requires a square covariance of the mean size');
   }
-  const scale = Math.max(1e-300, ...covariance.map((row, i) => Math.abs(row[i])));
   for (let i = 0; i < d; i++) {
+    if (!(covariance[i][i] >= 0) || !covariance[i].every(Number.isFinite)) {
+      throw new Error('multivariateNormalSampler requires a finite covariance with variances ≥ 0');
+    }
     for (let j = 0; j < i; j++) {
-      const tol = 1e-9 * Math.sqrt(Math.abs(covariance[i][i] * covariance[j][j])) + 1e-300;
+      const tol = 1e-9 * Math.sqrt(covariance[i][i] * covariance[j][j]) + 1e-300;
       if (Math.abs(covariance[i][j] - covariance[j][i]) > tol) throw new Error('multivariateNormalSampler requires a symmetric covariance');
     }
   }
-  const sigma = new Matrix(covariance);
+  // Factor the correlation matrix (scale-free tolerances), then scale back: Σ = D·R·D, L = D·L_R.
+  const sd = covariance.map((row, i) => Math.sqrt(row[i]));
+  const corr = new Matrix(d, d);
+  for (let i = 0; i < d; i++) {
+    for (let j = 0; j < d; j++) {
+      const denominator = sd[i] * sd[j];
+      corr.set(i, j, i === j ? (sd[i] > 0 ? 1 : 0) : denominator > 0 ? (covariance[i][j] + covariance[j][i]) / (2 * denominator) : 0);
+    }
+  }
   let factor: Matrix;
-  const cholesky = new CholeskyDecomposition(sigma);
+  const cholesky = new CholeskyDecomposition(corr);
   if (cholesky.isPositiveDefinite()) factor = cholesky.lowerTriangularMatrix;
   else {
-    const eig = new EigenvalueDecomposition(sigma, { assumeSymmetric: true });
+    const eig = new EigenvalueDecomposition(corr, { assumeSymmetric: true });
     const values = eig.realEigenvalues;
-    if (values.some((v) => v < -1e-9 * scale)) throw new Error('multivariateNormalSampler requires a positive semi-definite covariance');
+    if (values.some((v) => v < -1e-9)) throw new Error('multivariateNormalSampler requires a positive semi-definite covariance');
     const vectors = eig.eigenvectorMatrix;
     factor = new Matrix(d, d);
     for (let i = 0; i < d; i++) for (let j = 0; j < d; j++) factor.set(i, j, vectors.get(i, j) * Math.sqrt(Math.max(0, values[j])));
   }
+  for (let i = 0; i < d; i++) for (let j = 0; j < d; j++) factor.set(i, j, factor.get(i, j) * sd[i]);
   const l = factor.to2DArray();
   return (rng: Rng) => {
     const z = mean.map(() => rng.normal());

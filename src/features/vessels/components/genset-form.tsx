@@ -51,7 +51,7 @@ function defaultsFor(genset: Genset | undefined, busSections: { id: string }[]):
   if (!genset) {
     return {
       designation: '',
-      busSectionId: busSections[0]?.id ?? '',
+      busSectionId: busSections[0]?.id ?? null,
       frequencyHz: 60,
       speedClass: 'medium',
       duty: 'service',
@@ -66,7 +66,7 @@ function defaultsFor(genset: Genset | undefined, busSections: { id: string }[]):
     genset;
   return {
     designation,
-    busSectionId: busSectionId ?? '',
+    busSectionId,
     ratedKw,
     ratedKva,
     voltageV,
@@ -120,7 +120,8 @@ export function GensetForm({ vesselId, busSections, genset, onDone, onCancel }: 
           <Input id={idFor('designation')} placeholder="DG1" invalid={!!errors.designation} {...form.register('designation')} />
         </Field>
         <Field label="Bus section" htmlFor={idFor('busSectionId')} error={errors.busSectionId?.message}>
-          <Select id={idFor('busSectionId')} invalid={!!errors.busSectionId} {...form.register('busSectionId')}>
+          <Select id={idFor('busSectionId')} invalid={!!errors.busSectionId} {...form.register('busSectionId', { setValueAs: (v: unknown) => (v === '' ? null : v) })}>
+            <option value="">None (emergency switchboard)</option>
             {busSections.map((s) => (
               <option key={s.id} value={s.id}>
                 {s.name}

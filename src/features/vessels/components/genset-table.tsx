@@ -57,7 +57,7 @@ export function GensetTable({ vessel, canEdit, onEdit, onRemove, removingId }: G
         {vessel.gensets.map((g) => (
           <tr key={g.id} data-genset={g.designation}>
             <Td className="font-semibold text-hull-900">{g.designation}</Td>
-            <Td>{g.busSectionId ? (sectionName.get(g.busSectionId) ?? '–') : '–'}</Td>
+            <Td>{g.busSectionId ? (sectionName.get(g.busSectionId) ?? '–') : <span className="text-hull-500">emergency switchboard</span>}</Td>
             <Td numeric>
               {formatKw(g.ratedKw)}
               <br />

@@ -64,10 +64,13 @@ function checkFileName(name: string): void {
 async function savedMapping(db: DbOrTx, vesselId: string, headers: string[]): Promise<ColumnMapping | null> {
   const saved = await db.select().from(columnMappings).where(eq(columnMappings.vesselId, vesselId));
   const set = new Set(headers);
-  // The most recently saved mapping whose columns are all in this file.
+  // The most recently saved mapping made for these very columns (same header set).
   const fit = saved
     .sort((a, b) => b.updatedAt.getTime() - a.updatedAt.getTime())
-    .find((m) => Object.keys((m.mapping as ColumnMapping).columns ?? {}).every((h) => set.has(h)));
+    .find((m) => {
+      const keys = Object.keys((m.mapping as ColumnMapping).columns ?? {});
+      return keys.length === set.size && keys.every((h) => set.has(h));
+    });
   return fit ? (fit.mapping as ColumnMapping) : null;
 }
 

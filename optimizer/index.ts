@@ -5,3 +5,4 @@ export * from './random';
 export * from './fuel/index';
 export * from './logs/index';
 export * from './fit/index';
+export * from './savings/index';

@@ -11,6 +11,7 @@ import { companyRouter } from './routes/company';
 import { membersRouter } from './routes/members';
 import { vesselsRouter } from './routes/vessels';
 import { logsRouter } from './routes/logs';
+import { curvesRouter } from './routes/curves';
 
 /**
  * Builds the Express app: middleware -> routers -> errors. It never listens; server/index.ts does, and tests drive
@@ -47,6 +48,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/vessels', logsRouter(deps));
   api.use(membersRouter(deps));
   api.use(companyRouter(deps));
+  api.use(curvesRouter(deps));
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -6,3 +6,4 @@ export * from './schemas/auth';
 export * from './schemas/users';
 export * from './schemas/vessels';
 export * from './schemas/logs';
+export * from './schemas/curves';

@@ -14,6 +14,8 @@ export default defineConfig({
   },
   server: {
     proxy: {
+      // changeOrigin stays false: the API compares the browser's Origin with the Host it receives, and both are then
+      // the dev server's address.
       '/api': { target: `http://127.0.0.1:${apiPort}`, changeOrigin: false },
     },
   },

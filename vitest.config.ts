@@ -10,5 +10,7 @@ export default defineConfig({
     testTimeout: 30_000,
     hookTimeout: 60_000,
     fileParallelism: true,
+    // Two cores here and in CI: one worker per core.
+    maxWorkers: 2,
   },
 });

@@ -6,3 +6,4 @@ export * from './fuel/index';
 export * from './logs/index';
 export * from './fit/index';
 export * from './savings/index';
+export * from './dispatch/index';

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { useOutletContext } from 'react-router-dom';
-import { can, ROLE_LABELS, type Capability, type Me } from '../../shared';
+import { can, ROLE_LABELS, type Capability } from '../../shared/roles';
+import type { Me } from '../../shared/schemas/auth';
 import { PageHeader } from '../components/ui/page-header';
 
 /** The signed-in member, for pages under the signed-in layout (which renders them only once it is known). */

@@ -1,4 +1,4 @@
-import { errorBodySchema, type ErrorCode, type FieldIssue } from '../../shared';
+import { errorBodySchema, type ErrorCode, type FieldIssue } from '../../shared/errors';
 import type { z } from 'zod';
 
 /** A failed API call: the HTTP status and the server's `{ error: { code, message, details } }`. */

@@ -1,5 +1,7 @@
 import { Navigate, Outlet, useLocation, useNavigate, useNavigation } from 'react-router-dom';
-import { can, ROLE_LABELS, type Capability, type Me, type VesselSummary } from '../../../shared';
+import { can, ROLE_LABELS, type Capability } from '../../../shared/roles';
+import type { Me } from '../../../shared/schemas/auth';
+import type { VesselSummary } from '../../../shared/schemas/vessels';
 import { AppShell, type NavGroup, type NavItem } from '../../components/layouts/app-shell';
 import { ErrorState, LoadingState } from '../../components/ui/states';
 import { paths } from '../../config/paths';

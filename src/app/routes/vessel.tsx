@@ -1,6 +1,8 @@
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
-import { can, LIMITS, type Genset, type VesselDetail } from '../../../shared';
+import { LIMITS } from '../../../shared/limits';
+import { can } from '../../../shared/roles';
+import type { Genset, VesselDetail } from '../../../shared/schemas/vessels';
 import { Alert } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
 import { PageHeader } from '../../components/ui/page-header';

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { auditEntrySchema } from '../../../../shared';
+import { auditEntrySchema } from '../../../../shared/schemas/users';
 import { apiRequest } from '../../../lib/api-client';
 
 export const fetchAudit = (signal?: AbortSignal) => apiRequest('/api/audit', { schema: auditEntrySchema.array(), signal });

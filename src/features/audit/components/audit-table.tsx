@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { AuditEntry } from '../../../../shared';
+import type { AuditEntry } from '../../../../shared/schemas/users';
 import { Button } from '../../../components/ui/button';
 import { Table, Td, Th } from '../../../components/ui/table';
 import { formatDateTime } from '../../../lib/format';

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { meSchema, type AcceptInvitationInput } from '../../../../shared';
+import { meSchema, type AcceptInvitationInput } from '../../../../shared/schemas/auth';
 import { apiRequest } from '../../../lib/api-client';
 import { replaceSession } from './get-me';
 

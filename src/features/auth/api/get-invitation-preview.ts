@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { invitationPreviewSchema } from '../../../../shared';
+import { invitationPreviewSchema } from '../../../../shared/schemas/auth';
 import { apiRequest } from '../../../lib/api-client';
 
 export const fetchInvitationPreview = (token: string, signal?: AbortSignal) =>

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery, type QueryClient } from '@tanstack/react-query';
-import { meSchema, type Me } from '../../../../shared';
+import { meSchema, type Me } from '../../../../shared/schemas/auth';
 import { apiRequest, isApiError } from '../../../lib/api-client';
 
 /** The signed-in member, or null when there is no session. */

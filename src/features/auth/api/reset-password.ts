@@ -1,5 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
-import type { ResetPasswordInput } from '../../../../shared';
+import type { ResetPasswordInput } from '../../../../shared/schemas/auth';
 import { apiRequest } from '../../../lib/api-client';
 
 export const resetPassword = (input: ResetPasswordInput) =>

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { meSchema, type SignInInput } from '../../../../shared';
+import { meSchema, type SignInInput } from '../../../../shared/schemas/auth';
 import { apiRequest } from '../../../lib/api-client';
 import { replaceSession } from './get-me';
 

@@ -1,6 +1,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { acceptInvitationSchema, LIMITS, ROLE_LABELS, type InvitationPreview, type Me } from '../../../../shared';
+import { LIMITS } from '../../../../shared/limits';
+import { ROLE_LABELS } from '../../../../shared/roles';
+import { acceptInvitationSchema, type InvitationPreview, type Me } from '../../../../shared/schemas/auth';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Field, Input } from '../../../components/ui/form-field';

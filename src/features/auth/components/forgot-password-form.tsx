@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { forgotPasswordSchema } from '../../../../shared';
+import { forgotPasswordSchema } from '../../../../shared/schemas/auth';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Field, Input } from '../../../components/ui/form-field';

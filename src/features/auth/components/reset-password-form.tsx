@@ -1,6 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { LIMITS, resetPasswordSchema } from '../../../../shared';
+import { LIMITS } from '../../../../shared/limits';
+import { resetPasswordSchema } from '../../../../shared/schemas/auth';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Field, Input } from '../../../components/ui/form-field';

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { companySettingsSchema } from '../../../../shared';
+import { companySettingsSchema } from '../../../../shared/schemas/users';
 import { apiRequest } from '../../../lib/api-client';
 
 export const fetchCompany = (signal?: AbortSignal) => apiRequest('/api/company', { schema: companySettingsSchema, signal });

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { CompanySettings } from '../../../../shared';
+import type { CompanySettings } from '../../../../shared/schemas/users';
 import { apiRequest } from '../../../lib/api-client';
 import { companyQueryOptions } from './get-company';
 

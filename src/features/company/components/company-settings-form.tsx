@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { companySettingsSchema, type CompanySettings } from '../../../../shared';
+import { companySettingsSchema, type CompanySettings } from '../../../../shared/schemas/users';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Field, Input } from '../../../components/ui/form-field';

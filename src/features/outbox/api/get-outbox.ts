@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { outboxMessageSchema } from '../../../../shared';
+import { outboxMessageSchema } from '../../../../shared/schemas/users';
 import { apiRequest } from '../../../lib/api-client';
 
 export const fetchOutbox = (signal?: AbortSignal) => apiRequest('/api/outbox', { schema: outboxMessageSchema.array(), signal });

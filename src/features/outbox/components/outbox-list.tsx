@@ -1,4 +1,4 @@
-import type { OutboxMessage } from '../../../../shared';
+import type { OutboxMessage } from '../../../../shared/schemas/users';
 import { Badge } from '../../../components/ui/badge';
 import { formatDateTime } from '../../../lib/format';
 

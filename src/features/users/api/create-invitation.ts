@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { invitationSchema, type CreateInvitationInput } from '../../../../shared';
+import { invitationSchema, type CreateInvitationInput } from '../../../../shared/schemas/users';
 import { apiRequest } from '../../../lib/api-client';
 import { invitationsQueryOptions } from './get-invitations';
 

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { invitationSchema } from '../../../../shared';
+import { invitationSchema } from '../../../../shared/schemas/users';
 import { apiRequest } from '../../../lib/api-client';
 
 export const fetchInvitations = (signal?: AbortSignal) => apiRequest('/api/invitations', { schema: invitationSchema.array(), signal });

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { memberSchema } from '../../../../shared';
+import { memberSchema } from '../../../../shared/schemas/users';
 import { apiRequest } from '../../../lib/api-client';
 
 export const fetchMembers = (signal?: AbortSignal) => apiRequest('/api/members', { schema: memberSchema.array(), signal });

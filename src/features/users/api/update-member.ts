@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { UpdateMemberInput } from '../../../../shared';
+import type { UpdateMemberInput } from '../../../../shared/schemas/users';
 import { apiRequest } from '../../../lib/api-client';
 import { membersQueryOptions } from './get-members';
 

@@ -1,4 +1,5 @@
-import { ROLE_LABELS, type Invitation } from '../../../../shared';
+import { ROLE_LABELS } from '../../../../shared/roles';
+import type { Invitation } from '../../../../shared/schemas/users';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/states';

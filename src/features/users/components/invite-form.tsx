@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { createInvitationSchema, type CreateInvitationInput } from '../../../../shared';
+import { createInvitationSchema, type CreateInvitationInput } from '../../../../shared/schemas/users';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Field, Input, Select } from '../../../components/ui/form-field';

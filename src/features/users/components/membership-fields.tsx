@@ -1,5 +1,5 @@
 import { Controller, type Control, type FieldValues, type Path } from 'react-hook-form';
-import { ROLE_LABELS, ROLES, VESSEL_SCOPED_ROLES, type Role } from '../../../../shared';
+import { ROLE_LABELS, ROLES, VESSEL_SCOPED_ROLES, type Role } from '../../../../shared/roles';
 
 export interface VesselOption {
   id: string;

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { busSectionSchema } from '../../../../shared';
+import { busSectionSchema } from '../../../../shared/schemas/vessels';
 import { apiRequest } from '../../../lib/api-client';
 import { vesselQueryOptions } from './get-vessel';
 

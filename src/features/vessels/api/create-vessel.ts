@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { vesselDetailSchema, type VesselInput } from '../../../../shared';
+import { vesselDetailSchema, type VesselInput } from '../../../../shared/schemas/vessels';
 import { apiRequest } from '../../../lib/api-client';
 import { vesselsQueryOptions } from './get-vessels';
 

@@ -1,5 +1,5 @@
 import { queryOptions, useQueries, useQuery } from '@tanstack/react-query';
-import { vesselDetailSchema } from '../../../../shared';
+import { vesselDetailSchema } from '../../../../shared/schemas/vessels';
 import { apiRequest } from '../../../lib/api-client';
 import { vesselsQueryOptions } from './get-vessels';
 

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { vesselSummarySchema } from '../../../../shared';
+import { vesselSummarySchema } from '../../../../shared/schemas/vessels';
 import { apiRequest } from '../../../lib/api-client';
 
 export const fetchVessels = (signal?: AbortSignal) => apiRequest('/api/vessels', { schema: vesselSummarySchema.array(), signal });

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { VesselUpdate } from '../../../../shared';
+import type { VesselUpdate } from '../../../../shared/schemas/vessels';
 import { apiRequest } from '../../../lib/api-client';
 import { vesselsQueryOptions } from './get-vessels';
 

@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import type { VesselSummary } from '../../../../shared';
+import type { VesselSummary } from '../../../../shared/schemas/vessels';
 import { paths } from '../../../config/paths';
 import { formatDate, formatKw } from '../../../lib/format';
 import { useVesselDetails } from '../api/get-vessel';

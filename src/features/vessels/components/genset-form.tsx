@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, type DefaultValues } from 'react-hook-form';
 import type { z } from 'zod';
-import { gensetInputSchema, type Genset, type GensetInput } from '../../../../shared';
+import { gensetInputSchema, type Genset, type GensetInput } from '../../../../shared/schemas/vessels';
 import { Alert } from '../../../components/ui/alert';
 import { FormActions } from '../../../components/ui/form-actions';
 import { Field, Input, Select } from '../../../components/ui/form-field';

@@ -1,4 +1,4 @@
-import type { Genset, VesselDetail } from '../../../../shared';
+import type { Genset, VesselDetail } from '../../../../shared/schemas/vessels';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { Table, Td, Th } from '../../../components/ui/table';

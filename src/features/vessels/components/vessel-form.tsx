@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { FUEL_GRADES, VESSEL_TYPES, vesselInputSchema, type VesselDetail, type VesselInput } from '../../../../shared';
+import { FUEL_GRADES, VESSEL_TYPES, vesselInputSchema, type VesselDetail, type VesselInput } from '../../../../shared/schemas/vessels';
 import { Alert } from '../../../components/ui/alert';
 import { FormActions } from '../../../components/ui/form-actions';
 import { Field, Input, Select } from '../../../components/ui/form-field';

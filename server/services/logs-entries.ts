@@ -195,10 +195,11 @@ export async function updateLog(deps: AppDeps, actor: Actor, vesselId: string, l
       const [clash] = await tx.select({ id: gensetDailyLogs.id }).from(gensetDailyLogs).where(and(eq(gensetDailyLogs.gensetId, input.gensetId), eq(gensetDailyLogs.logDate, input.logDate)));
       if (clash) throw duplicateDay(set.designation, input.logDate);
     }
-    // A hand edit takes the row out of its import: undoing that import will not silently drop the edit.
+    // A hand edit marks the row 'manual' but keeps the import that wrote it: undoing that import is then refused
+    // rather than silently dropping the edit.
     const [after] = await tx
       .update(gensetDailyLogs)
-      .set({ ...entryValues(input), source: 'manual', importId: null, updatedAt: deps.now() })
+      .set({ ...entryValues(input), source: 'manual', updatedAt: deps.now() })
       .where(eq(gensetDailyLogs.id, logId))
       .returning();
     await recordAudit(tx, actor, 'genset_daily_log', logId, 'update', before, after);

@@ -1,7 +1,9 @@
 /**
  * Import history and undo. Undo removes exactly the rows an import created and restores the values it overwrote.
- * It is refused (409, naming the rows) when any of those rows was changed afterwards by another import or by hand,
- * or deleted: restoring them would silently drop the later change. Undo the later import first.
+ * It is refused (409, naming the rows) when any of those rows was overwritten afterwards by another (still committed)
+ * import, edited by hand, or (an overwritten row) deleted: restoring them would silently drop the later change.
+ * Undo the later import first. Rows the import created are found by their import_id; only overwritten rows have a
+ * change record with their before values.
  */
 import { and, desc, eq, sql } from 'drizzle-orm';
 import type { LogImport, ModeField } from '../../shared/schemas/logs';
@@ -36,7 +38,7 @@ export async function listImports(deps: AppDeps, actor: Actor, vesselId: string)
   }));
 }
 
-const BATCH = 5000;
+const BATCH = 10_000;
 
 export async function undoImport(deps: AppDeps, actor: Actor, vesselId: string, importId: string): Promise<{ rowsRemoved: number; rowsRestored: number }> {
   return deps.db.transaction(async (tx) => {
@@ -48,24 +50,40 @@ export async function undoImport(deps: AppDeps, actor: Actor, vesselId: string, 
       .for('update');
     if (!imp) throw notFound('Import');
     if (imp.status === 'undone') throw new AppError('conflict', 'This import has been undone already');
-    // Each change of the import beside the row as it is now.
-    const current = await tx.execute<{ genset_id: string; log_date: string; before: RowBefore | null; row_id: string | null; import_id: string | null; source: string | null; designation: string }>(sql`
+    // Rows the import overwrote (its change records) beside the row as it is now.
+    const overwrittenNow = await tx.execute<{ genset_id: string; log_date: string; before: RowBefore; row_id: string | null; import_id: string | null; source: string | null; designation: string }>(sql`
       select c.genset_id, c.log_date::text as log_date, c.before, l.id as row_id, l.import_id, l.source, g.designation
       from ${logImportChanges} c
       join ${gensets} g on g.id = c.genset_id
       left join genset_daily_logs l on l.genset_id = c.genset_id and l.log_date = c.log_date
       where c.import_id = ${importId}`);
-    const changes = current.rows;
-    const later = changes.filter((c) => c.row_id === null || c.import_id !== importId || c.source !== 'import');
-    if (later.length) {
+    // Rows still carrying the import: created by it (no change record) or overwritten by it; 'manual' = edited since.
+    const carrying = await tx.execute<{ genset_id: string; log_date: string; source: string; designation: string }>(sql`
+      select l.genset_id, l.log_date::text as log_date, l.source, g.designation
+      from genset_daily_logs l join ${gensets} g on g.id = l.genset_id
+      where l.import_id = ${importId}`);
+    // Rows of this import that a later, still committed import overwrote.
+    const laterImports = await tx.execute<{ genset_id: string; log_date: string; designation: string }>(sql`
+      select c.genset_id, c.log_date::text as log_date, g.designation
+      from ${logImportChanges} c
+      join ${logImports} i on i.id = c.import_id and i.status = 'committed'
+      join ${gensets} g on g.id = c.genset_id
+      where c.import_id <> ${importId} and c.before->>'importId' = ${importId}`);
+    const conflicts = [
+      ...laterImports.rows.map((c) => ({ path: `${c.designation} ${c.log_date}`, message: 'Overwritten by a later import' })),
+      ...carrying.rows.filter((c) => c.source !== 'import').map((c) => ({ path: `${c.designation} ${c.log_date}`, message: 'Edited by hand after this import' })),
+      ...overwrittenNow.rows.filter((c) => c.row_id === null).map((c) => ({ path: `${c.designation} ${c.log_date}`, message: 'Deleted after this import' })),
+    ];
+    if (conflicts.length) {
       throw new AppError(
         'conflict',
-        `${later.length} row(s) of this import were changed or deleted afterwards (first: ${later[0].designation} ${later[0].log_date}); undo the later import or edit those days by hand`,
-        later.slice(0, 50).map((c) => ({ path: `${c.designation} ${c.log_date}`, message: c.row_id === null ? 'Deleted after this import' : c.source === 'import' ? 'Overwritten by a later import' : 'Edited by hand after this import' })),
+        `${conflicts.length} row(s) of this import were changed or deleted afterwards (first: ${conflicts[0].path}); undo the later import or edit those days by hand`,
+        conflicts.slice(0, 50),
       );
     }
-    const created = changes.filter((c) => c.before === null);
-    const overwritten = changes.filter((c) => c.before !== null);
+    const overwritten = overwrittenNow.rows;
+    const overwrittenKeys = new Set(overwritten.map((c) => `${c.genset_id}|${c.log_date}`));
+    const created = carrying.rows.filter((c) => !overwrittenKeys.has(`${c.genset_id}|${c.log_date}`));
     for (let i = 0; i < created.length; i += BATCH) {
       const json = JSON.stringify(created.slice(i, i + BATCH).map((c) => ({ g: c.genset_id, d: c.log_date })));
       await tx.execute(sql`

@@ -312,7 +312,7 @@ export async function previewUpload(deps: AppDeps, actor: Actor, vesselId: strin
   };
 }
 
-const BATCH = 5000;
+const BATCH = 10_000;
 
 function num(v: number | null): number | null {
   return v === null ? null : v;
@@ -354,7 +354,7 @@ export interface RowBefore extends RawLogValues {
   importId: string | null;
 }
 
-async function insertChanges(tx: DbOrTx, importId: string, rows: { gensetId: string; logDate: string; before: RowBefore | null }[]): Promise<void> {
+async function insertChanges(tx: DbOrTx, importId: string, rows: { gensetId: string; logDate: string; before: RowBefore }[]): Promise<void> {
   for (let i = 0; i < rows.length; i += BATCH) {
     const json = JSON.stringify(rows.slice(i, i + BATCH).map((r) => ({ g: r.gensetId, d: r.logDate, b: r.before })));
     await tx.execute(sql`
@@ -424,14 +424,16 @@ export async function commitUpload(deps: AppDeps, actor: Actor, vesselId: string
       .returning();
     const toWrite = write.map((r) => ({ gensetId: r.file.gensetId as string, logDate: r.file.logDate as string, values: r.values as RawLogValues }));
     await upsertLogs(tx, imp.id, toWrite);
+    // Only overwritten rows need a before record; the rows the import created carry its import_id.
     await insertChanges(
       tx,
       imp.id,
-      write.map((r) => ({
-        gensetId: r.file.gensetId as string,
-        logDate: r.file.logDate as string,
-        before: r.before ? { ...rawOf(r.before), source: r.before.source, importId: r.before.importId } : null,
-      })),
+      write
+        .filter((r) => r.before !== null)
+        .map((r) => {
+          const b = r.before as StoredLog;
+          return { gensetId: b.gensetId, logDate: b.logDate, before: { ...rawOf(b), source: b.source, importId: b.importId } };
+        }),
     );
     if (writeModes.length) {
       await upsertModeHours(tx, vesselId, writeModes.map((m) => ({ logDate: m.file.logDate, ...m.values })));

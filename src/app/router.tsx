@@ -26,6 +26,7 @@ const routes: RouteObject[] = [
         children: [
           { index: true, ...page(() => import('./routes/fleet')) },
           { path: paths.vessel.pattern, ...page(() => import('./routes/vessel')) },
+          { path: paths.vesselCurves.pattern, ...page(() => import('./routes/vessel-curves')) },
           { path: paths.adminUsers.pattern, ...page(() => import('./routes/admin-users')) },
           { path: paths.adminOutbox.pattern, ...page(() => import('./routes/admin-outbox')) },
           { path: paths.adminSettings.pattern, ...page(() => import('./routes/admin-settings')) },

@@ -10,6 +10,7 @@ export const paths = {
   acceptInvitation: { pattern: '/accept-invitation', href: () => '/accept-invitation' },
   fleet: { pattern: '/', href: () => '/' },
   vessel: { pattern: '/vessels/:vesselId', href: (vesselId: string) => `/vessels/${encodeURIComponent(vesselId)}` },
+  vesselCurves: { pattern: '/vessels/:vesselId/curves', href: (vesselId: string) => `/vessels/${encodeURIComponent(vesselId)}/curves` },
   adminUsers: { pattern: '/admin/users', href: () => '/admin/users' },
   adminOutbox: { pattern: '/admin/outbox', href: () => '/admin/outbox' },
   adminSettings: { pattern: '/admin/settings', href: () => '/admin/settings' },

@@ -10,6 +10,7 @@ import { formatKw } from '../../lib/format';
 import { useVessels } from '../../features/vessels/api/get-vessels';
 import { FleetOverview } from '../../features/vessels/components/fleet-overview';
 import { VesselForm } from '../../features/vessels/components/vessel-form';
+import { FleetDriftSummary } from '../../features/curves/components/drift-badge';
 import { useSignedIn } from '../signed-in';
 
 export function Component() {
@@ -40,6 +41,11 @@ export function Component() {
       {adding ? (
         <Panel title="New vessel" className="mb-6">
           <VesselForm onCancel={() => setAdding(false)} onDone={(vesselId) => navigate(paths.vessel.href(vesselId))} />
+        </Panel>
+      ) : null}
+      {vessels.data?.length ? (
+        <Panel title="SFOC drift since overhaul" className="mb-6">
+          <FleetDriftSummary />
         </Panel>
       ) : null}
       <QueryView

@@ -18,6 +18,7 @@ import { BusSectionForm } from '../../features/vessels/components/bus-section-fo
 import { GensetForm } from '../../features/vessels/components/genset-form';
 import { GensetTable } from '../../features/vessels/components/genset-table';
 import { VesselForm } from '../../features/vessels/components/vessel-form';
+import { VesselDriftBadge } from '../../features/curves/components/drift-badge';
 import { useSignedIn } from '../signed-in';
 
 type Editing = { kind: 'none' } | { kind: 'vessel' } | { kind: 'new-set' } | { kind: 'set'; genset: Genset };
@@ -52,6 +53,10 @@ function VesselPage({ vessel }: { vessel: VesselDetail }) {
         description={`IMO ${vessel.imoNumber} · ${vessel.vesselType} · ${vessel.fuelGrades.join(', ')} · ${formatKw(vessel.installedKw)} in ${vessel.gensetCount} ${vessel.gensetCount === 1 ? 'set' : 'sets'} · last log ${vessel.lastLogDate ? formatDate(vessel.lastLogDate) : 'none yet'}`}
         actions={
           <>
+            <VesselDriftBadge vesselId={vessel.id} />
+            <Link to={paths.vesselCurves.href(vessel.id)} className="text-small font-semibold underline" data-action="open-curves">
+              Fuel curves
+            </Link>
             {mayEditVessel && editing.kind !== 'vessel' ? (
               <Button variant="secondary" onClick={() => setEditing({ kind: 'vessel' })}>
                 Edit vessel

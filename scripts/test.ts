@@ -144,7 +144,11 @@ async function main(): Promise<number> {
       totals.skipped += e2e.skipped;
     }
   } finally {
-    if (server) server.kill('SIGTERM');
+    if (server && server.exitCode === null) {
+      const exited = new Promise((resolve) => server!.once('exit', resolve));
+      server.kill('SIGTERM');
+      await Promise.race([exited, new Promise((resolve) => setTimeout(resolve, 10_000))]);
+    }
     stopCluster(CLUSTER_DIR);
     rmSync(CLUSTER_DIR, { recursive: true, force: true });
     rmSync(`${CLUSTER_DIR}.secret`, { force: true });

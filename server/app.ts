@@ -12,6 +12,8 @@ import { membersRouter } from './routes/members';
 import { vesselsRouter } from './routes/vessels';
 import { logsRouter } from './routes/logs';
 import { curvesRouter } from './routes/curves';
+import { recommendationsRouter } from './routes/recommendations';
+import { plansRouter } from './routes/plans';
 
 /**
  * Builds the Express app: middleware -> routers -> errors. It never listens; server/index.ts does, and tests drive
@@ -49,6 +51,8 @@ export function createApp(deps: AppDeps): Express {
   api.use(membersRouter(deps));
   api.use(companyRouter(deps));
   api.use(curvesRouter(deps));
+  api.use(recommendationsRouter(deps));
+  api.use(plansRouter(deps));
   api.use(notFoundApi);
   app.use('/api', api);
 

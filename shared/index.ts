@@ -7,3 +7,5 @@ export * from './schemas/users';
 export * from './schemas/vessels';
 export * from './schemas/logs';
 export * from './schemas/curves';
+export * from './schemas/recommendations';
+export * from './schemas/plans';

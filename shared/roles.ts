@@ -27,6 +27,8 @@ export const CAPABILITIES = {
   'vessels:edit': ['admin', 'superintendent'],
   'vessels:delete': ['admin'],
   'plant:edit': ['admin', 'superintendent', 'chief_engineer'],
+  /** Set a genset available / unavailable / must-run for recommendations. */
+  'plant:status': ['chief_engineer', 'superintendent'],
   'logs:edit': ['chief_engineer', 'superintendent'],
   'recommendations:run': ['admin', 'superintendent', 'chief_engineer', 'energy_officer', 'planner'],
   'plans:approve': ['superintendent'],

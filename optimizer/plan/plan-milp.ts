@@ -129,8 +129,8 @@ export function buildPlanMilp(problem: PlanProblem): MilpModel {
       if (down.terms.length > 1) push(down.add(1, un), '<=', 1);
       // Initial state hold, must-run.
       const held = init[i].on ? startH[t] + init[i].hoursInState < u.minUpH - EPS_H : startH[t] + init[i].hoursInState < u.minDownH - EPS_H;
-      if (u.mustRun || (held && init[i].on)) bounds.push(` ${un} = 1`);
-      else if (held) bounds.push(` ${un} = 0`);
+      if (u.mustRun) bounds.push(` ${un} = 1`);
+      if (held) push(new Row().add(1, un), '=', init[i].on ? 1 : 0);
     }
     const budget = problem.maxRunningHours?.[u.id];
     if (budget !== undefined && u.available) {

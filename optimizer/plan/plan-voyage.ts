@@ -214,8 +214,8 @@ export function planVoyage(problem: PlanProblem, options: PlanOptions = {}): Voy
         maxLabelsPerPeriod: options.maxLabelsPerPeriod ?? 40_000,
         maxWork: options.maxLabelWork ?? 3e7,
       };
-      for (const width of [32, 256]) {
-        if (Number.isFinite(bestUb) && width > 32) break;
+      for (const width of [32, 256, 2048]) {
+        if (closedGap()) break;
         const beam = solveCommitmentDp(grid, trueCosts, { maxStates: width, bounds: { upperBoundKg: bestUb, toGoKg }, tracking });
         if (beam.masks) candidate(beam.masks, beam.costKg, new Array<number>(n).fill(0));
       }

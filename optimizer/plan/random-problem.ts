@@ -17,6 +17,8 @@ export interface RandomPlanOptions {
   nMinus1?: number;
   openTie?: number;
   budgets?: number;
+  /** Most units with a running-hour budget (sets approaching overhaul, common practice). Default 2. */
+  maxBudgetedUnits?: number;
   /** Largest minimum up / down time, h. Default 4. */
   maxMinUpH?: number;
   /** Period durations are 1 h, or drawn from 1 to this many hours. Default 1. */
@@ -94,9 +96,12 @@ export function randomPlanProblem(seed: number, o: RandomPlanOptions): PlanProbl
     periods.push(p);
   }
   const initialState: Record<string, InitialUnitState> = {};
-  for (const u of units) initialState[u.id] = { on: u.available && rng.uniform() < 0.5, hoursInState: rng.int(0, 5) };
+  for (const u of units) initialState[u.id] = { on: u.mustRun || (u.available && rng.uniform() < 0.5), hoursInState: rng.int(0, 8) };
   const horizonH = periods.reduce((s, p) => s + p.durationH, 0);
   const maxRunningHours: Record<string, number> = {};
-  for (const u of units) if (rng.uniform() < (o.budgets ?? 0.3)) maxRunningHours[u.id] = Math.round(horizonH * (0.2 + 0.6 * rng.uniform()));
+  for (const u of units) {
+    if (Object.keys(maxRunningHours).length >= (o.maxBudgetedUnits ?? 2)) break;
+    if (rng.uniform() < (o.budgets ?? 0.3)) maxRunningHours[u.id] = Math.round(horizonH * (0.4 + 0.5 * rng.uniform()));
+  }
   return { units, periods, initialState, maxRunningHours };
 }

@@ -84,7 +84,7 @@ function SetView({ vesselId, gensetId, curveWindow }: { vesselId: string; genset
               label={`SFOC of ${set.designation} against load: ${set.points.length} daily points, fitted curve with 95 % band, shop test`}
             />
             <p className="text-caption text-hull-500">Points fade with age (oldest faint). Triangles: days down-weighted by the robust fit. Dashed: extrapolated beyond the days’ loads.</p>
-            <div className="grid gap-6 lg:grid-cols-2">
+            <div className="flex flex-col gap-6">
               <CoefficientTable set={set} fit={set.fit} />
               <AtLoadsTable fit={set.fit} />
             </div>

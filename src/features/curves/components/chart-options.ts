@@ -105,7 +105,8 @@ export function vesselCurvesOption(sets: CurveSetFit[]): EChartsOption {
   const series: (LineSeriesOption | ScatterSeriesOption)[] = [];
   sets.forEach((set, i) => {
     const colour = SET_COLOURS[i % SET_COLOURS.length];
-    if (set.fit) series.push(...curveSeries(set.designation, colour, set.fit.samples, true));
+    // from 25 % of rating: below it the band of a thinly logged set would set the scale for all
+    if (set.fit) series.push(...curveSeries(set.designation, colour, set.fit.samples.filter((x) => x.loadKw >= 0.25 * set.ratedKw - 1e-9), true));
     if (set.shopTest.length) series.push(shopSeries(`${set.designation} shop test`, colour, set));
   });
   return {

@@ -54,6 +54,7 @@ function VesselPage({ vessel }: { vessel: VesselDetail }) {
         actions={
           <>
             <VesselDriftBadge vesselId={vessel.id} />
+            <Link to={paths.vesselLogs.href(vessel.id)} className="text-small font-semibold underline" data-action="open-logs">Engine-room log</Link>
             <Link to={paths.vesselCurves.href(vessel.id)} className="text-small font-semibold underline" data-action="open-curves">
               Fuel curves
             </Link>

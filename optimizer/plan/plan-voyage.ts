@@ -88,7 +88,11 @@ function pricedCosts(grid: DpGrid, lambda: number[]): Float64Array[] {
  */
 export function planVoyage(problem: PlanProblem, options: PlanOptions = {}): VoyagePlan {
   validatePlanProblem(problem, 'planVoyage');
-  const progress = options.onProgress ?? (() => undefined);
+  let reported = 0;
+  const progress = (f: number) => {
+    reported = Math.max(reported, Math.min(1, f));
+    options.onProgress?.(reported);
+  };
   const optimalityGap = options.optimalityGap ?? 1e-6;
   const maxStates = options.maxStatesPerPeriod ?? 200_000;
   const maxIter = options.maxPriceIterations ?? 40;

@@ -30,6 +30,7 @@ const routes: RouteObject[] = [
           { path: paths.vesselRecommend.pattern, ...page(() => import('./routes/vessel-recommend')) },
           { path: paths.vesselGuideline.pattern, ...page(() => import('./routes/vessel-guideline')) },
           { path: paths.vesselPlans.pattern, ...page(() => import('./routes/vessel-plans')) },
+          { path: paths.vesselRules.pattern, ...page(() => import('./routes/vessel-rules')) },
           { path: paths.adminUsers.pattern, ...page(() => import('./routes/admin-users')) },
           { path: paths.adminOutbox.pattern, ...page(() => import('./routes/admin-outbox')) },
           { path: paths.adminSettings.pattern, ...page(() => import('./routes/admin-settings')) },

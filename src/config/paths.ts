@@ -14,6 +14,7 @@ export const paths = {
   vesselRecommend: { pattern: '/vessels/:vesselId/recommend', href: (vesselId: string) => `/vessels/${encodeURIComponent(vesselId)}/recommend` },
   vesselGuideline: { pattern: '/vessels/:vesselId/guideline', href: (vesselId: string) => `/vessels/${encodeURIComponent(vesselId)}/guideline` },
   vesselPlans: { pattern: '/vessels/:vesselId/plans', href: (vesselId: string) => `/vessels/${encodeURIComponent(vesselId)}/plans` },
+  vesselRules: { pattern: '/vessels/:vesselId/rules', href: (vesselId: string) => `/vessels/${encodeURIComponent(vesselId)}/rules` },
   adminUsers: { pattern: '/admin/users', href: () => '/admin/users' },
   adminOutbox: { pattern: '/admin/outbox', href: () => '/admin/outbox' },
   adminSettings: { pattern: '/admin/settings', href: () => '/admin/settings' },

@@ -58,6 +58,18 @@ function VesselPage({ vessel }: { vessel: VesselDetail }) {
             <Link to={paths.vesselCurves.href(vessel.id)} className="text-small font-semibold underline" data-action="open-curves">
               Fuel curves
             </Link>
+            <Link to={paths.vesselRecommend.href(vessel.id)} className="text-small font-semibold underline" data-action="open-recommend">
+              Recommend sets
+            </Link>
+            <Link to={paths.vesselGuideline.href(vessel.id)} className="text-small font-semibold underline" data-action="open-guideline">
+              Guideline
+            </Link>
+            <Link to={paths.vesselPlans.href(vessel.id)} className="text-small font-semibold underline" data-action="open-plans">
+              Voyage plans
+            </Link>
+            <Link to={paths.vesselRules.href(vessel.id)} className="text-small font-semibold underline" data-action="open-rules">
+              Operating rules
+            </Link>
             {mayEditVessel && editing.kind !== 'vessel' ? (
               <Button variant="secondary" onClick={() => setEditing({ kind: 'vessel' })}>
                 Edit vessel

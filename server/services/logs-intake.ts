@@ -4,6 +4,10 @@
  * transaction with bulk upserts and the before values undo needs.
  */
 import { createHash } from 'node:crypto';
+import { Readable } from 'node:stream';
+import { pipeline } from 'node:stream/promises';
+import type pg from 'pg';
+import { from as copyFrom } from 'pg-copy-streams';
 import { and, eq, sql } from 'drizzle-orm';
 import { dayNumber, dateOfDayNumber } from '../../optimizer/index';
 import {
@@ -314,38 +318,11 @@ export async function previewUpload(deps: AppDeps, actor: Actor, vesselId: strin
 
 const BATCH = 10_000;
 
-function num(v: number | null): number | null {
-  return v === null ? null : v;
-}
-
-/** Writes rows through json_to_recordset: one parameter per batch, so 100 000 rows take 20 statements. */
-async function upsertLogs(tx: DbOrTx, importId: string, rows: { gensetId: string; logDate: string; values: RawLogValues }[]): Promise<void> {
-  for (let i = 0; i < rows.length; i += BATCH) {
-    const json = JSON.stringify(
-      rows.slice(i, i + BATCH).map((r) => ({
-        g: r.gensetId,
-        d: r.logDate,
-        rhm: num(r.values.runningHoursMeter),
-        hr: num(r.values.hoursRun),
-        km: num(r.values.kwhMeter),
-        k: num(r.values.kwh),
-        fm: num(r.values.fuelMassKg),
-        fv: num(r.values.fuelVolumeL),
-        ft: num(r.values.fuelTempC),
-        lot: r.values.fuelLotId,
-        rem: r.values.remarks,
-      })),
-    );
-    await tx.execute(sql`
-      insert into genset_daily_logs (genset_id, log_date, running_hours_meter, hours_run, kwh_meter, kwh, fuel_mass_kg, fuel_volume_l, fuel_temp_c, fuel_lot_id, remarks, source, import_id, updated_at)
-      select x.g, x.d, x.rhm, x.hr, x.km, x.k, x.fm, x.fv, x.ft, x.lot, x.rem, 'import', ${importId}::uuid, now()
-      from json_to_recordset(${json}::json) as x(g uuid, d date, rhm float8, hr float8, km float8, k float8, fm float8, fv float8, ft float8, lot uuid, rem text)
-      on conflict (genset_id, log_date) do update set
-        running_hours_meter = excluded.running_hours_meter, hours_run = excluded.hours_run, kwh_meter = excluded.kwh_meter,
-        kwh = excluded.kwh, fuel_mass_kg = excluded.fuel_mass_kg, fuel_volume_l = excluded.fuel_volume_l,
-        fuel_temp_c = excluded.fuel_temp_c, fuel_lot_id = excluded.fuel_lot_id, remarks = excluded.remarks,
-        source = 'import', import_id = excluded.import_id, updated_at = now()`);
-  }
+/** A value in COPY text format: \\N for null, backslash, tab, newline and carriage return escaped. */
+function copyText(v: string | number | null): string {
+  if (v === null) return '\\N';
+  if (typeof v === 'number') return String(v);
+  return /[\\\t\n\r]/.test(v) ? v.replace(/[\\\t\n\r]/g, (c) => (c === '\\' ? '\\\\' : c === '\t' ? '\\t' : c === '\n' ? '\\n' : '\\r')) : v;
 }
 
 /** The before value of an overwritten row, as undo restores it. */
@@ -354,13 +331,67 @@ export interface RowBefore extends RawLogValues {
   importId: string | null;
 }
 
-async function insertChanges(tx: DbOrTx, importId: string, rows: { gensetId: string; logDate: string; before: RowBefore }[]): Promise<void> {
+interface RowToWrite {
+  gensetId: string;
+  logDate: string;
+  values: RawLogValues;
+  /** The stored row it overwrites (kept in log_import_changes for undo); null for a new row. */
+  before: RowBefore | null;
+}
+
+/** COPY text lines of the rows, in chunks of BATCH lines. */
+function* copyLines(rows: RowToWrite[]): Generator<string> {
   for (let i = 0; i < rows.length; i += BATCH) {
-    const json = JSON.stringify(rows.slice(i, i + BATCH).map((r) => ({ g: r.gensetId, d: r.logDate, b: r.before })));
-    await tx.execute(sql`
-      insert into log_import_changes (import_id, genset_id, log_date, before)
-      select ${importId}::uuid, x.g, x.d, x.b from json_to_recordset(${json}::json) as x(g uuid, d date, b jsonb)`);
+    let chunk = '';
+    for (let k = i; k < Math.min(rows.length, i + BATCH); k++) {
+      const { gensetId, logDate, values: v, before } = rows[k];
+      chunk +=
+        `${gensetId}\t${logDate}\t${copyText(v.runningHoursMeter)}\t${copyText(v.hoursRun)}\t${copyText(v.kwhMeter)}\t${copyText(v.kwh)}\t` +
+        `${copyText(v.fuelMassKg)}\t${copyText(v.fuelVolumeL)}\t${copyText(v.fuelTempC)}\t${copyText(v.fuelLotId)}\t${copyText(v.remarks)}\t` +
+        `${before ? copyText(JSON.stringify(before)) : '\\N'}\n`;
+    }
+    yield chunk;
   }
+}
+
+/** The pg client a drizzle node-postgres transaction runs on (COPY needs the client itself). */
+function clientOf(tx: DbOrTx): pg.PoolClient {
+  const client = (tx as unknown as { session?: { client?: pg.PoolClient } }).session?.client;
+  if (!client || typeof client.query !== 'function' || typeof (client as { release?: unknown }).release !== 'function') {
+    throw new Error('writeLogs requires a transaction on a pooled node-postgres client');
+  }
+  return client;
+}
+
+/**
+ * Writes the rows of an import in its transaction: COPY into a temporary table (dropped at commit), then one
+ * INSERT ... SELECT ... ON CONFLICT into genset_daily_logs and one INSERT of the before values of overwritten rows
+ * into log_import_changes (rows the import created carry its import_id instead).
+ */
+async function writeLogs(tx: DbOrTx, importId: string, rows: RowToWrite[]): Promise<void> {
+  if (!rows.length) return;
+  const client = clientOf(tx);
+  await client.query(`create temp table intake_rows (
+    genset_id uuid, log_date date, running_hours_meter float8, hours_run float8, kwh_meter float8, kwh float8,
+    fuel_mass_kg float8, fuel_volume_l float8, fuel_temp_c float8, fuel_lot_id uuid, remarks text, before jsonb) on commit drop`);
+  await pipeline(Readable.from(copyLines(rows)), client.query(copyFrom('copy intake_rows from stdin')));
+  await client.query(
+    `insert into genset_daily_logs (genset_id, log_date, running_hours_meter, hours_run, kwh_meter, kwh, fuel_mass_kg, fuel_volume_l, fuel_temp_c, fuel_lot_id, remarks, source, import_id, updated_at)
+    select genset_id, log_date, running_hours_meter, hours_run, kwh_meter, kwh, fuel_mass_kg, fuel_volume_l, fuel_temp_c, fuel_lot_id, remarks, 'import', $1::uuid, now()
+    from intake_rows
+    on conflict (genset_id, log_date) do update set
+      running_hours_meter = excluded.running_hours_meter, hours_run = excluded.hours_run, kwh_meter = excluded.kwh_meter,
+      kwh = excluded.kwh, fuel_mass_kg = excluded.fuel_mass_kg, fuel_volume_l = excluded.fuel_volume_l,
+      fuel_temp_c = excluded.fuel_temp_c, fuel_lot_id = excluded.fuel_lot_id, remarks = excluded.remarks,
+      source = 'import', import_id = excluded.import_id, updated_at = now()`,
+    [importId],
+  );
+  await client.query(
+    `insert into log_import_changes (import_id, genset_id, log_date, before)
+    select $1::uuid, genset_id, log_date, before from intake_rows where before is not null`,
+    [importId],
+  );
+  await client.query('drop table intake_rows');
 }
 
 /** Upserts vessel mode-hour days in one statement per batch. */
@@ -422,18 +453,18 @@ export async function commitUpload(deps: AppDeps, actor: Actor, vesselId: string
         rowsRejected: counts.rejected,
       })
       .returning();
-    const toWrite = write.map((r) => ({ gensetId: r.file.gensetId as string, logDate: r.file.logDate as string, values: r.values as RawLogValues }));
-    await upsertLogs(tx, imp.id, toWrite);
-    // Only overwritten rows need a before record; the rows the import created carry its import_id.
-    await insertChanges(
+    await writeLogs(
       tx,
       imp.id,
-      write
-        .filter((r) => r.before !== null)
-        .map((r) => {
-          const b = r.before as StoredLog;
-          return { gensetId: b.gensetId, logDate: b.logDate, before: { ...rawOf(b), source: b.source, importId: b.importId } };
-        }),
+      write.map((r) => {
+        const b = r.before;
+        return {
+          gensetId: r.file.gensetId as string,
+          logDate: r.file.logDate as string,
+          values: r.values as RawLogValues,
+          before: b ? { ...rawOf(b), source: b.source, importId: b.importId } : null,
+        };
+      }),
     );
     if (writeModes.length) {
       await upsertModeHours(tx, vesselId, writeModes.map((m) => ({ logDate: m.file.logDate, ...m.values })));

@@ -1,9 +1,10 @@
 import { useState } from 'react';
-import { useParams } from 'react-router-dom';
+import { Link, useParams } from 'react-router-dom';
 import { PageHeader } from '../../components/ui/page-header';
 import { Panel } from '../../components/ui/panel';
 import { EmptyState, QueryView } from '../../components/ui/states';
 import { Table, Td, Th } from '../../components/ui/table';
+import { paths } from '../../config/paths';
 import { useMe } from '../../features/auth/api/get-me';
 import { useApprovePlan } from '../../features/plans/api/approve-plan';
 import { usePlan } from '../../features/plans/api/get-plan';
@@ -11,6 +12,8 @@ import { usePlans } from '../../features/plans/api/get-plans';
 import { useResolvePlan } from '../../features/plans/api/resolve-plan';
 import { PlanForm } from '../../features/plans/components/plan-form';
 import { PlanView } from '../../features/plans/components/plan-view';
+import { useOperatingRules } from '../../features/recommendations/api/get-operating-rules';
+import { usePlantModel } from '../../features/recommendations/api/get-plant-model';
 import { Caution } from '../../features/recommendations/components/caution';
 import { formatDate, formatKg } from '../../lib/format';
 import { can } from '../../../shared/roles';
@@ -35,6 +38,21 @@ function OnePlan({ vesselId, planId, onOpen }: { vesselId: string; planId: strin
   );
 }
 
+/** The plan form with what it needs from the plant: bus section names and the modes whose bus tie is open. */
+function NewPlan({ vesselId, onCreated }: { vesselId: string; onCreated: (id: string) => void }) {
+  const plant = usePlantModel(vesselId);
+  const rules = useOperatingRules(vesselId);
+  return (
+    <QueryView query={plant} loadingLabel="Loading the plant…">
+      {(p) => (
+        <QueryView query={rules} loadingLabel="Loading the operating rules…">
+          {(r) => <PlanForm vesselId={vesselId} busSections={p.busSections} openTieModes={r.rules.filter((x) => !x.busTieClosed).map((x) => x.mode)} onCreated={onCreated} />}
+        </QueryView>
+      )}
+    </QueryView>
+  );
+}
+
 /** Voyage plans: a load profile over up to 30 days, solved in the background, compared with the PMS baseline. */
 export function Component() {
   const { vesselId = '' } = useParams();
@@ -42,10 +60,18 @@ export function Component() {
   const [open, setOpen] = useState<string | null>(null);
   return (
     <div className="space-y-4">
-      <PageHeader title="Voyage plans" description="Which sets to run in every period and how to share the load, with the distance from the optimum stated." />
+      <PageHeader
+        title="Voyage plans"
+        description="Which sets to run in every period and how to share the load, with the distance from the optimum stated."
+        actions={
+          <Link to={paths.vesselRules.href(vesselId)} className="text-small font-semibold underline" data-action="open-rules">
+            Operating rules (reserve, bus tie)
+          </Link>
+        }
+      />
       <Caution />
       <Panel title="New plan">
-        <PlanForm vesselId={vesselId} onCreated={setOpen} />
+        <NewPlan vesselId={vesselId} onCreated={setOpen} />
       </Panel>
       {open ? <OnePlan vesselId={vesselId} planId={open} onOpen={setOpen} /> : null}
       <Panel title="Saved plans">

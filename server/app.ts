@@ -14,6 +14,11 @@ import { logsRouter } from './routes/logs';
 import { curvesRouter } from './routes/curves';
 import { recommendationsRouter } from './routes/recommendations';
 import { plansRouter } from './routes/plans';
+import { savingsRouter } from './routes/savings';
+import { fleetRouter } from './routes/fleet';
+import { reportsRouter } from './routes/reports';
+import { subscriptionsRouter } from './routes/subscriptions';
+import { fuelPricesRouter } from './routes/fuel-prices';
 
 /**
  * Builds the Express app: middleware -> routers -> errors. It never listens; server/index.ts does, and tests drive
@@ -53,6 +58,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(curvesRouter(deps));
   api.use(recommendationsRouter(deps));
   api.use(plansRouter(deps));
+  api.use(savingsRouter(deps), fleetRouter(deps), reportsRouter(deps), subscriptionsRouter(deps), fuelPricesRouter(deps));
   api.use(notFoundApi);
   app.use('/api', api);
 

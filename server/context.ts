@@ -17,6 +17,14 @@ export interface AppDeps {
     clientDir?: string;
   };
   now: () => Date;
+  /** The background job queue (server/jobs); absent in tests that run without it. */
+  jobs?: JobQueue;
+}
+
+/** What request handlers may queue as background work. */
+export interface JobQueue {
+  /** Refit a vessel's curves after its logs changed (e.g. after an import). */
+  enqueueRefit(job: { companyId: string; vesselId: string }): Promise<void>;
 }
 
 /** The signed-in member acting on a request. */

@@ -5,6 +5,7 @@
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { createApp } from './app';
+import { createJobs } from './jobs/index';
 import type { AppDeps } from './context';
 import { connect } from './db/client';
 import { parseEnv } from './env';
@@ -47,6 +48,9 @@ export async function startServer(): Promise<{ url: string; close(): Promise<voi
     },
     now: () => new Date(),
   };
+  const jobs = createJobs(deps, env.DATABASE_URL, { onDone: (queue, result) => console.log(`[jobs] ${queue} ${JSON.stringify(result)}`) });
+  await jobs.start();
+  deps.jobs = jobs;
   const app = createApp(deps);
   const server = await new Promise<import('node:http').Server>((resolve) => {
     const s = app.listen(env.KILOWATCH_PORT, env.KILOWATCH_HOST, () => resolve(s));
@@ -58,6 +62,7 @@ export async function startServer(): Promise<{ url: string; close(): Promise<voi
     url,
     async close() {
       await new Promise<void>((resolve) => server.close(() => resolve()));
+      await jobs.stop();
       mailer.close();
       await fake?.close();
       await database.close();

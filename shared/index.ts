@@ -9,3 +9,4 @@ export * from './schemas/logs';
 export * from './schemas/curves';
 export * from './schemas/recommendations';
 export * from './schemas/plans';
+export * from './schemas/savings'; export * from './schemas/fleet'; export * from './schemas/reports';

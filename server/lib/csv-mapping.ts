@@ -17,7 +17,7 @@ import {
 } from '../../shared/schemas/logs';
 import { AppError } from '../errors';
 import type { CsvRecord } from './csv';
-import { parseDateCell, parseNumberCell, toStoredUnit, type DecimalSeparator } from './csv-values';
+import { UNIT_TO_STORED, parseDateCell, parseNumberCell, type DecimalSeparator } from './csv-values';
 
 function norm(header: string): string {
   return header
@@ -224,88 +224,126 @@ export interface InterpretContext {
 
 const NON_NEGATIVE: (keyof RawLogValues)[] = ['runningHoursMeter', 'kwhMeter', 'kwh', 'fuelMassKg', 'fuelVolumeL'];
 
+/** A mapped column ready for the row loop: its raw field, unit factor and label looked up once per file. */
+interface ColumnReader {
+  plan: ColumnPlan;
+  raw: keyof RawLogValues | undefined;
+  factor: number;
+  nonNegative: boolean;
+  label: string;
+}
+
+function readerOf(p: ColumnPlan): ColumnReader {
+  const raw = SET_FIELD_TO_RAW[p.field];
+  return { plan: p, raw, factor: UNIT_TO_STORED[p.unit ?? 'h'], nonNegative: raw !== undefined && NON_NEGATIVE.includes(raw), label: FIELD_LABELS[p.field] };
+}
+
+/** A number cell in stored units, or null (blank); a bad cell adds an issue naming the column and gives null. */
+function numberOf(text: string, c: ColumnReader, row: number, decimal: DecimalSeparator, issues: Issue[]): number | null {
+  const n = parseNumberCell(text, decimal);
+  if (!n.ok) {
+    issues.push({ row, path: c.plan.header, message: `${c.label}: ${n.message}` });
+    return null;
+  }
+  return n.value === null ? null : n.value * c.factor;
+}
+
+type DateOutcome = { logDate: string; message: null } | { logDate: null; message: string };
+
+/** A date cell checked against the format and the accepted range. */
+function dateOutcome(raw: string, ctx: InterpretContext): DateOutcome {
+  if (raw.trim() === '') return { logDate: null, message: 'The date is missing' };
+  const d = parseDateCell(raw, ctx.dateFormat);
+  if (!d.ok) return { logDate: null, message: d.message };
+  if (d.value < ctx.minDate || d.value > ctx.maxDate) return { logDate: null, message: `${d.value} is outside the accepted range ${ctx.minDate} to ${ctx.maxDate}` };
+  return { logDate: d.value, message: null };
+}
+
 /**
  * Turns records into set-days and mode days. Cell problems (text in a number, a bad date, an unknown lot, a
  * negative reading) become issues of the row naming the column; they never throw.
+ *
+ * Cost O(rows x mapped columns); each distinct date text and lot reference is read once per file.
  */
 export function interpretRecords(records: CsvRecord[], plan: MappingPlan, ctx: InterpretContext): { setDays: FileSetDay[]; modeDays: FileModeDay[] } {
   const setDays: FileSetDay[] = [];
   const modeDays: FileModeDay[] = [];
+  const dateIndex = plan.dateColumn.index;
+  const dateHeader = plan.dateColumn.header;
+  const gensetIndex = plan.gensetColumn ? plan.gensetColumn.index : -1;
+  const modeReaders = plan.modeColumns.map(readerOf);
+  const groups = [...plan.groups].map(([key, cols]) => ({ key, readers: cols.map(readerOf) }));
+  // Long files repeat each date once per set: read each distinct text once.
+  const dates = new Map<string, DateOutcome>();
+  const lotIds = new Map<string, string | undefined>();
+  const { decimal } = ctx;
   for (const rec of records) {
+    const { row, cells } = rec;
     const rowIssues: Issue[] = [];
-    const cell = (p: ColumnPlan) => rec.cells[p.index] ?? '';
-    const dateRaw = cell(plan.dateColumn);
-    let logDate: string | null = null;
-    if (dateRaw.trim() === '') rowIssues.push({ row: rec.row, path: plan.dateColumn.header, message: 'The date is missing' });
-    else {
-      const d = parseDateCell(dateRaw, ctx.dateFormat);
-      if (!d.ok) rowIssues.push({ row: rec.row, path: plan.dateColumn.header, message: d.message });
-      else if (d.value < ctx.minDate || d.value > ctx.maxDate) {
-        rowIssues.push({ row: rec.row, path: plan.dateColumn.header, message: `${d.value} is outside the accepted range ${ctx.minDate} to ${ctx.maxDate}` });
-      } else logDate = d.value;
-    }
-    const numberOf = (p: ColumnPlan, issues: Issue[]): number | null => {
-      const n = parseNumberCell(cell(p), ctx.decimal);
-      if (!n.ok) {
-        issues.push({ row: rec.row, path: p.header, message: `${FIELD_LABELS[p.field]}: ${n.message}` });
-        return null;
-      }
-      return n.value === null ? null : toStoredUnit(n.value, p.unit ?? 'h');
-    };
+    const dateRaw = cells[dateIndex] ?? '';
+    let date = dates.get(dateRaw);
+    if (!date) dates.set(dateRaw, (date = dateOutcome(dateRaw, ctx)));
+    const logDate = date.logDate;
+    if (date.message !== null) rowIssues.push({ row, path: dateHeader, message: date.message });
     // Mode hours.
-    if (plan.modeColumns.length) {
+    if (modeReaders.length) {
       const issues: Issue[] = [];
       const values: Partial<Record<ModeField, number>> = {};
       let any = false;
-      for (const p of plan.modeColumns) {
-        const v = numberOf(p, issues);
+      for (const c of modeReaders) {
+        const v = numberOf(cells[c.plan.index] ?? '', c, row, decimal, issues);
         if (v === null) continue;
         any = true;
-        if (v < 0 || v > 25) issues.push({ row: rec.row, path: p.header, message: `${FIELD_LABELS[p.field]} must be between 0 and 25 h (got ${v})` });
-        values[p.field as ModeField] = v;
+        if (v < 0 || v > 25) issues.push({ row, path: c.plan.header, message: `${c.label} must be between 0 and 25 h (got ${v})` });
+        values[c.plan.field as ModeField] = v;
       }
       const total = Object.values(values).reduce((s, v) => s + v, 0);
-      if (total > 25) issues.push({ row: rec.row, path: plan.modeColumns[0].header, message: `Mode hours add up to ${total} h, more than a day (25 h at most on a clock-change day)` });
-      if (any && logDate) modeDays.push({ row: rec.row, logDate, values, errors: [...rowIssues, ...issues] });
+      if (total > 25) issues.push({ row, path: plan.modeColumns[0].header, message: `Mode hours add up to ${total} h, more than a day (25 h at most on a clock-change day)` });
+      if (any && logDate) modeDays.push({ row, logDate, values, errors: [...rowIssues, ...issues] });
     }
     // Set days.
-    for (const [key, cols] of plan.groups) {
-      const issues: Issue[] = [];
+    for (const { key, readers } of groups) {
+      const issues: Issue[] = rowIssues.length ? [...rowIssues] : [];
       let designation: string | null = key || null;
       if (!key && plan.gensetColumn) {
-        designation = cell(plan.gensetColumn).trim() || null;
-        if (!designation) issues.push({ row: rec.row, path: plan.gensetColumn.header, message: 'The genset is missing' });
+        designation = (cells[gensetIndex] ?? '').trim() || null;
+        if (!designation) issues.push({ row, path: plan.gensetColumn.header, message: 'The genset is missing' });
       }
       const values: Partial<RawLogValues> = {};
       let anyValue = false;
-      for (const p of cols) {
-        const raw = SET_FIELD_TO_RAW[p.field] as keyof RawLogValues;
-        const text = cell(p).trim();
+      for (const c of readers) {
+        const raw = c.raw as keyof RawLogValues;
+        const cell = cells[c.plan.index] ?? '';
         if (raw === 'remarks') {
+          const text = cell.trim();
           values.remarks = text === '' ? null : text.slice(0, 500);
           continue;
         }
         if (raw === 'fuelLotId') {
+          const text = cell.trim();
           if (text === '') values.fuelLotId = null;
           else {
             anyValue = true;
-            const id = ctx.lotIdByReference.get(text.toLowerCase());
-            if (!id) issues.push({ row: rec.row, path: p.header, message: `Fuel lot "${text}" is not in this vessel's fuel lot register` });
+            let id = lotIds.get(text);
+            if (id === undefined && !lotIds.has(text)) lotIds.set(text, (id = ctx.lotIdByReference.get(text.toLowerCase())));
+            if (!id) issues.push({ row, path: c.plan.header, message: `Fuel lot "${text}" is not in this vessel's fuel lot register` });
             values.fuelLotId = id ?? null;
           }
           continue;
         }
-        const v = numberOf(p, issues);
-        if (v !== null) anyValue = true;
-        if (v !== null && NON_NEGATIVE.includes(raw) && v < 0) issues.push({ row: rec.row, path: p.header, message: `${FIELD_LABELS[p.field]} cannot be negative (got ${v})` });
+        const v = numberOf(cell, c, row, decimal, issues);
+        if (v !== null) {
+          anyValue = true;
+          if (c.nonNegative && v < 0) issues.push({ row, path: c.plan.header, message: `${c.label} cannot be negative (got ${v})` });
+        }
         (values as Record<string, number | null>)[raw] = v;
       }
       // A wide file's set with every cell blank was not logged that day.
       if (key && !anyValue) continue;
-      setDays.push({ row: rec.row, designation, logDate, values, errors: [...rowIssues, ...issues] });
+      setDays.push({ row, designation, logDate, values, errors: issues });
     }
     if (plan.groups.size === 0 && rowIssues.length && plan.modeColumns.length) {
-      modeDays.push({ row: rec.row, logDate: logDate ?? '', values: {}, errors: rowIssues });
+      modeDays.push({ row, logDate: logDate ?? '', values: {}, errors: rowIssues });
     }
   }
   return { setDays, modeDays };

@@ -9,12 +9,44 @@ export type DecimalSeparator = '.' | ',';
 /** Spaces people put between thousands: space, no-break space, narrow no-break space, thin space. */
 const GROUP_SPACES = /[ \u00a0\u202f\u2009]/g;
 
+const CH_0 = 48;
+const CH_9 = 57;
+const CH_PLUS = 43;
+const CH_MINUS = 45;
+
+/**
+ * The value of a cell that is a plain decimal numeral (optional sign, digits, at most one decimal separator of the
+ * file's kind, digits on both sides of it, nothing else), else null: the common case, read without regular
+ * expressions. Every other cell goes through the full rules of parseNumberCell, which give the same value here.
+ */
+function plainNumber(s: string, decimal: DecimalSeparator): number | null {
+  const n = s.length;
+  let i = 0;
+  if (n === 0) return null;
+  const first = s.charCodeAt(0);
+  if (first === CH_PLUS || first === CH_MINUS) i = 1;
+  const sep = decimal === ',' ? 44 : 46;
+  let digits = 0;
+  let sepAt = -1;
+  for (; i < n; i++) {
+    const c = s.charCodeAt(i);
+    if (c >= CH_0 && c <= CH_9) digits++;
+    else if (c === sep && sepAt < 0 && digits > 0) sepAt = i;
+    else return null;
+  }
+  if (digits === 0 || sepAt === n - 1) return null;
+  const value = Number(sepAt >= 0 && decimal === ',' ? `${s.slice(0, sepAt)}.${s.slice(sepAt + 1)}` : s);
+  return Number.isFinite(value) ? value : null;
+}
+
 /**
  * Parses a number cell. Blank → null. With '.' decimals, a comma is refused (it would be a thousands separator or a
  * decimal comma; the file must say which). With ',' decimals, '.' is accepted only as a thousands separator in
  * groups of three (1.234,5). Spaces between digit groups are accepted. Anything else → an error message.
  */
 export function parseNumberCell(raw: string, decimal: DecimalSeparator): { ok: true; value: number | null } | { ok: false; message: string } {
+  const plain = plainNumber(raw, decimal);
+  if (plain !== null) return { ok: true, value: plain };
   let s = raw.trim();
   if (s === '') return { ok: true, value: null };
   s = s.replace(GROUP_SPACES, '');
@@ -53,11 +85,16 @@ const DATE_PATTERNS: Record<DateFormat, RegExp> = {
   'dd.mm.yyyy': /^(\d{1,2})\.(\d{1,2})\.(\d{4})$/,
 };
 
+/** Days in a month of the proleptic Gregorian calendar. */
+function daysInMonth(y: number, m: number): number {
+  if (m === 2) return (y % 4 === 0 && y % 100 !== 0) || y % 400 === 0 ? 29 : 28;
+  return m === 4 || m === 6 || m === 9 || m === 11 ? 30 : 31;
+}
+
 function isoOf(y: number, m: number, d: number): string | null {
-  const ms = Date.UTC(y, m - 1, d);
-  const back = new Date(ms);
-  if (back.getUTCFullYear() !== y || back.getUTCMonth() !== m - 1 || back.getUTCDate() !== d) return null;
-  return `${String(y).padStart(4, '0')}-${String(m).padStart(2, '0')}-${String(d).padStart(2, '0')}`;
+  // Years 0 to 99 are refused (Date.UTC reads them as 1900 to 1999; no engine-room log is that old).
+  if (y < 100 || m < 1 || m > 12 || d < 1 || d > daysInMonth(y, m)) return null;
+  return `${String(y).padStart(4, '0')}-${m < 10 ? '0' : ''}${m}-${d < 10 ? '0' : ''}${d}`;
 }
 
 /** Parses a date cell in the given format into YYYY-MM-DD; a malformed or impossible date gives a message. */

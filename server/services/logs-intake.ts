@@ -137,23 +137,29 @@ export async function parseUpload(deps: AppDeps, actor: Actor, vesselId: string,
   const maxDate = dateOfDayNumber(dayNumber(deps.now().toISOString().slice(0, 10)) + 1);
   const { setDays, modeDays } = interpretRecords(records, plan, { dateFormat, decimal, lotIdByReference, minDate: MIN_LOG_DATE, maxDate });
   const byDesignation = new Map(context.sets.map((s) => [s.designation.toLowerCase(), s.id]));
-  const resolved = setDays.map((d) => {
+  const resolved = setDays as ParsedUpload['setDays'];
+  // Duplicate dates in the file: every copy is refused.
+  const keys: (string | null)[] = new Array(resolved.length);
+  const seen = new Map<string, number[]>();
+  for (let i = 0; i < resolved.length; i++) {
+    const d = resolved[i];
     const gensetId = d.designation ? (byDesignation.get(d.designation.toLowerCase()) ?? null) : null;
+    d.gensetId = gensetId;
     if (d.designation && !gensetId) {
       d.errors.push({ row: d.row, path: plan.gensetColumn?.header ?? 'genset', message: `Set "${d.designation}" is not in this vessel's genset register (${designations.join(', ') || 'none registered'})` });
     }
-    return { ...d, gensetId };
-  });
-  // Duplicate dates in the file: every copy is refused.
-  const seen = new Map<string, number[]>();
-  for (const d of resolved) {
-    if (!d.gensetId || !d.logDate) continue;
-    const key = `${d.gensetId}|${d.logDate}`;
-    seen.set(key, [...(seen.get(key) ?? []), d.row]);
+    const key = gensetId && d.logDate ? `${gensetId}|${d.logDate}` : null;
+    keys[i] = key;
+    if (key === null) continue;
+    const rows = seen.get(key);
+    if (rows) rows.push(d.row);
+    else seen.set(key, [d.row]);
   }
-  for (const d of resolved) {
-    const rows = d.gensetId && d.logDate ? seen.get(`${d.gensetId}|${d.logDate}`) : undefined;
+  for (let i = 0; i < resolved.length; i++) {
+    const key = keys[i];
+    const rows = key === null ? undefined : seen.get(key);
     if (rows && rows.length > 1) {
+      const d = resolved[i];
       d.errors.push({ row: d.row, path: plan.dateColumn.header, message: `${d.designation} ${d.logDate} appears ${rows.length} times in the file (rows ${rows.join(', ')}); keep one (DUPLICATE_DATE)` });
     }
   }
@@ -318,11 +324,19 @@ export async function previewUpload(deps: AppDeps, actor: Actor, vesselId: strin
 
 const BATCH = 10_000;
 
-/** A value in COPY text format: \\N for null, backslash, tab, newline and carriage return escaped. */
-function copyText(v: string | number | null): string {
+/** A number or null in COPY text format (\N for null). */
+function copyNumber(v: number | null): string {
+  return v === null ? '\\N' : String(v);
+}
+
+const COPY_SPECIAL = /[\\\t\n\r]/g;
+const COPY_ESCAPES: Record<string, string> = { '\\': '\\\\', '\t': '\\t', '\n': '\\n', '\r': '\\r' };
+
+/** A text or null in COPY text format: \N for null; backslash, tab, newline and carriage return escaped. */
+function copyText(v: string | null): string {
   if (v === null) return '\\N';
-  if (typeof v === 'number') return String(v);
-  return /[\\\t\n\r]/.test(v) ? v.replace(/[\\\t\n\r]/g, (c) => (c === '\\' ? '\\\\' : c === '\t' ? '\\t' : c === '\n' ? '\\n' : '\\r')) : v;
+  COPY_SPECIAL.lastIndex = 0;
+  return COPY_SPECIAL.test(v) ? v.replace(COPY_SPECIAL, (c) => COPY_ESCAPES[c]) : v;
 }
 
 /** The before value of an overwritten row, as undo restores it. */
@@ -339,18 +353,20 @@ interface RowToWrite {
   before: RowBefore | null;
 }
 
-/** COPY text lines of the rows, in chunks of BATCH lines. */
+/** COPY text lines of the rows, in chunks of BATCH lines (uuids and dates need no escaping). */
 function* copyLines(rows: RowToWrite[]): Generator<string> {
+  const lines: string[] = [];
   for (let i = 0; i < rows.length; i += BATCH) {
-    let chunk = '';
+    lines.length = 0;
     for (let k = i; k < Math.min(rows.length, i + BATCH); k++) {
       const { gensetId, logDate, values: v, before } = rows[k];
-      chunk +=
-        `${gensetId}\t${logDate}\t${copyText(v.runningHoursMeter)}\t${copyText(v.hoursRun)}\t${copyText(v.kwhMeter)}\t${copyText(v.kwh)}\t` +
-        `${copyText(v.fuelMassKg)}\t${copyText(v.fuelVolumeL)}\t${copyText(v.fuelTempC)}\t${copyText(v.fuelLotId)}\t${copyText(v.remarks)}\t` +
-        `${before ? copyText(JSON.stringify(before)) : '\\N'}\n`;
+      lines.push(
+        `${gensetId}\t${logDate}\t${copyNumber(v.runningHoursMeter)}\t${copyNumber(v.hoursRun)}\t${copyNumber(v.kwhMeter)}\t${copyNumber(v.kwh)}\t` +
+          `${copyNumber(v.fuelMassKg)}\t${copyNumber(v.fuelVolumeL)}\t${copyNumber(v.fuelTempC)}\t${v.fuelLotId ?? '\\N'}\t${copyText(v.remarks)}\t` +
+          `${before ? copyText(JSON.stringify(before)) : '\\N'}\n`,
+      );
     }
-    yield chunk;
+    yield lines.join('');
   }
 }
 

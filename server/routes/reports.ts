@@ -1,6 +1,7 @@
 import { Router, type Response } from 'express';
 import type { MonthlyReport } from '../../shared/schemas/reports';
 import type { AppDeps } from '../context';
+import { notFound } from '../errors';
 import { idParam } from '../lib/parse';
 import { actorOf, requireCapability } from '../middleware/auth';
 import { getFleetReport, getVesselReport, reportCsv, reportFileName, reportXlsx } from '../services/reports';
@@ -20,8 +21,10 @@ async function send(res: Response, report: MonthlyReport, format: string | undef
     res.setHeader('Content-Type', XLSX_TYPE);
     res.setHeader('Content-Disposition', `attachment; filename="${reportFileName(report, 'xlsx')}"`);
     res.send(await reportXlsx(report));
-  } else {
+  } else if (format === undefined) {
     res.json(report);
+  } else {
+    throw notFound('Report format');
   }
 }
 

@@ -16,12 +16,12 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
-import { createRng, dateOfDayNumber, dayNumber, vesselSavings, type GensetUnit } from '../../optimizer/index';
+import { createRng, dateOfDayNumber, dayNumber, FUEL_GRADES, vesselSavings, type GensetUnit } from '../../optimizer/index';
 import { fuelLots, gensetDailyLogs, gensets, operatingRules, vesselModeHours } from '../../server/db/schema';
 import type { VesselCurves } from '../../shared/schemas/curves';
 import type { FleetBenchmark } from '../../shared/schemas/fleet';
 import type { MonthlyReport } from '../../shared/schemas/reports';
-import type { FuelPriceRow, VesselSavingsReport } from '../../shared/schemas/savings';
+import { PRICED_FUEL_GRADES, type FuelPriceRow, type VesselSavingsReport } from '../../shared/schemas/savings';
 import { createTenant, startTestApp, type HttpClient, type Tenant, type TestApp } from '../setup/test-app';
 
 const REL = 1e-9;
@@ -216,6 +216,8 @@ describe('fuel prices', () => {
     expect((await superintendent.request('PUT', '/api/fuel-prices', { grade: 'MGO', pricePerT: 1, validFrom: '2026-04-01' })).status).toBe(403);
     expect((await admin.request('PUT', '/api/fuel-prices', { grade: 'XYZ', pricePerT: 1, validFrom: '2026-04-01' })).status).toBe(422);
     expect((await otherAdmin.get<FuelPriceRow[]>('/api/fuel-prices')).body).toEqual([]);
+    // The shared grade list mirrors optimizer/fuel's (shared/ cannot import optimizer/).
+    expect([...PRICED_FUEL_GRADES]).toEqual([...FUEL_GRADES]);
     expect((await otherAdmin.delete(`/api/fuel-prices/${list.body[0].id}`)).status).toBe(404);
   });
 });
@@ -256,6 +258,7 @@ describe('fleet benchmark and reports', () => {
     await wb.xlsx.load(await res.arrayBuffer());
     expect(wb.worksheets.map((w) => w.name)).toEqual(['Summary', 'Vessels', 'Sets']);
     expect(wb.getWorksheet('Vessels')!.rowCount).toBe(3);
+    expect((await officer.get(`/api/vessels/${vesselId}/reports/monthly.pdf?month=2026-03`)).status).toBe(404);
   });
 });
 

@@ -17,7 +17,7 @@ export function GuidelineSheet({ guideline }: { guideline: Guideline }) {
       </header>
       <Caution />
       {guideline.modes.map((m) => (
-        <section key={m.mode}>
+        <section key={m.mode} data-mode={m.mode}>
           <h3 className="font-semibold">
             {OPERATING_MODE_LABELS[m.mode]} — margin {formatKw(m.rule.marginKw)} or {m.rule.marginPct} %, at least {m.rule.minSets} set(s)
             {m.rule.nMinus1 ? ', N-1' : ''}, bus tie {m.rule.busTieClosed ? 'closed' : 'open'}
@@ -35,7 +35,7 @@ export function GuidelineSheet({ guideline }: { guideline: Guideline }) {
             </thead>
             <tbody>
               {m.bands.map((b) => (
-                <tr key={`${b.fromKw}-${b.toKw}`} className="border-b">
+                <tr key={`${b.fromKw}-${b.toKw}`} className="border-b" data-band={b.designations.join('+')} data-from-kw={b.fromKw} data-to-kw={b.toKw}>
                   <td>
                     {formatKw(b.fromKw)} – {formatKw(b.toKw)}
                   </td>

@@ -1,31 +1,45 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { OPERATING_MODE_LABELS, OPERATING_MODES, singlePointInputSchema, type SinglePointInput, type SinglePointResult } from '../../../../shared/schemas/recommendations';
+import { OPERATING_MODE_LABELS, OPERATING_MODES, singlePointInputSchema, type OperatingModeName, type SinglePointInput, type SinglePointResult } from '../../../../shared/schemas/recommendations';
 import { LazyChart } from '../../../components/charts/lazy-chart';
 import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { Field, Input, Select } from '../../../components/ui/form-field';
 import { Panel } from '../../../components/ui/panel';
-import { ErrorState } from '../../../components/ui/states';
 import { Table, Td, Th } from '../../../components/ui/table';
 import { formatKg, formatKw, formatPct, formatSfoc } from '../../../lib/format';
-import { applyServerErrors } from '../../../lib/form-errors';
-import { toNumber } from '../../../lib/number-fields';
+import { useServerErrors } from '../../../lib/form-errors';
+import { numberFieldMessages, toNumber } from '../../../lib/number-fields';
 import { useRecommendAtPoint } from '../api/recommend-at-point';
 import { Caution } from './caution';
 import { setLoadsOption } from './chart-options';
 
+/**
+ * What the schema checks for a mode: the plant load with the bus tie closed (or one section), else the load of
+ * every section (a blank section becomes NaN, so the schema asks for it beside its field).
+ */
+function pointFor(values: SinglePointInput, busSections: readonly string[], bySection: boolean): SinglePointInput {
+  if (!bySection) return { mode: values.mode, loadKw: values.loadKw };
+  return { mode: values.mode, sectionLoadsKw: Object.fromEntries(busSections.map((s) => [s, values.sectionLoadsKw?.[s] ?? Number.NaN])) };
+}
+
+const optionalNumber = (v: unknown) => (v === '' || v === undefined ? undefined : toNumber(v));
+
 /** Load input (and mode) and the ranked combinations with loads, reasons and the saving against equal split. */
-export function SinglePointPanel({ vesselId, busSections }: { vesselId: string; busSections: string[] }) {
+export function SinglePointPanel({ vesselId, busSections, openTieModes }: { vesselId: string; busSections: string[]; openTieModes: readonly OperatingModeName[] }) {
   const run = useRecommendAtPoint();
-  const form = useForm<SinglePointInput>({ resolver: zodResolver(singlePointInputSchema), defaultValues: { mode: 'sea' } });
+  const splitBy = (mode: OperatingModeName) => busSections.length > 1 && openTieModes.includes(mode);
+  const base = zodResolver(singlePointInputSchema, numberFieldMessages);
+  const form = useForm<SinglePointInput>({
+    resolver: (values, context, options) => base(pointFor(values, busSections, splitBy(values.mode)), context, options),
+    defaultValues: { mode: 'sea' },
+  });
+  const server = useServerErrors(form.setError, ['loadKw', 'mode', 'sectionLoadsKw']);
+  const bySection = splitBy(form.watch('mode'));
   const submit = form.handleSubmit((input) => {
-    const sections = input.sectionLoadsKw && Object.values(input.sectionLoadsKw).some((v) => Number.isFinite(v)) ? input.sectionLoadsKw : undefined;
-    run.mutate(
-      { vesselId, input: { mode: input.mode, ...(sections ? { sectionLoadsKw: sections } : { loadKw: input.loadKw }) } },
-      { onError: (e) => applyServerErrors(e, form.setError, ['loadKw', 'mode', 'sectionLoadsKw']) },
-    );
+    server.clear();
+    run.mutate({ vesselId, input }, { onError: server.onError });
   });
   const e = form.formState.errors;
   const sectionError = (e.sectionLoadsKw as { message?: string } | undefined)?.message;
@@ -38,28 +52,34 @@ export function SinglePointPanel({ vesselId, busSections }: { vesselId: string; 
               {OPERATING_MODES.map((m) => (
                 <option key={m} value={m}>
                   {OPERATING_MODE_LABELS[m]}
+                  {splitBy(m) ? ' (bus tie open)' : ''}
                 </option>
               ))}
             </Select>
           </Field>
-          <Field label="Electrical load" htmlFor="sp-load" error={e.loadKw?.message}>
-            <Input id="sp-load" unit="kW" inputMode="decimal" invalid={!!e.loadKw} {...form.register('loadKw', { setValueAs: (v) => (v === '' ? undefined : toNumber(v)) })} />
-          </Field>
-          {busSections.length > 1
-            ? busSections.map((s) => (
-                <Field key={s} label={`Section ${s} (bus tie open)`} htmlFor={`sp-sec-${s}`} hint="Only when the tie is open">
-                  <Input id={`sp-sec-${s}`} unit="kW" inputMode="decimal" {...form.register(`sectionLoadsKw.${s}`, { setValueAs: (v) => (v === '' ? undefined : toNumber(v)) })} />
-                </Field>
-              ))
-            : null}
+          {bySection ? (
+            busSections.map((s) => (
+              <Field key={s} label={`Section ${s} load`} htmlFor={`sp-sec-${s}`} error={e.sectionLoadsKw?.[s]?.message} hint="Bus tie open: each section carries its own load">
+                <Input id={`sp-sec-${s}`} unit="kW" inputMode="decimal" invalid={!!e.sectionLoadsKw?.[s]} {...form.register(`sectionLoadsKw.${s}`, { setValueAs: optionalNumber })} />
+              </Field>
+            ))
+          ) : (
+            <Field label="Electrical load" htmlFor="sp-load" error={e.loadKw?.message}>
+              <Input id="sp-load" unit="kW" inputMode="decimal" invalid={!!e.loadKw} {...form.register('loadKw', { setValueAs: optionalNumber })} />
+            </Field>
+          )}
           <Button type="submit" pending={run.isPending} pendingLabel="Computing…">
             Recommend
           </Button>
         </form>
         {sectionError ? <p className="mt-2 text-small text-signal-700">{sectionError}</p> : null}
+        {server.problem ? (
+          <div className="mt-3">
+            <Alert tone="error">No recommendation: {server.problem}</Alert>
+          </div>
+        ) : null}
       </Panel>
       <Caution />
-      {run.isError && !form.formState.errors.loadKw ? <ErrorState error={run.error} title="No recommendation" /> : null}
       {run.data ? <SinglePointResultView result={run.data} /> : null}
     </div>
   );
@@ -70,7 +90,7 @@ function SinglePointResultView({ result }: { result: SinglePointResult }) {
   if (!result.feasible) {
     return (
       <Alert tone="error">
-        <strong>No combination of sets meets this mode&apos;s rules at {formatKw(result.loadKw)}:</strong>
+        <strong data-result="infeasible">No combination of sets meets this mode&apos;s rules at {formatKw(result.loadKw)}:</strong>
         <ul className="ml-5 list-disc">
           {result.reasons.map((r) => (
             <li key={r}>{r}</li>
@@ -81,7 +101,7 @@ function SinglePointResultView({ result }: { result: SinglePointResult }) {
   }
   const best = result.combinations[0];
   return (
-    <div className="space-y-4">
+    <div className="space-y-4" data-result="single-point" data-best={best.designations.join('+')}>
       <Panel title={`Run ${best.designations.join(' + ')}`}>
         <p className="text-small">
           Fuel {formatKg(best.fuelKgPerH)}/h ({formatKg(best.fuelKgPerDay)}/day), plant SFOC {formatSfoc(best.sfocGPerKwh)}, reserve left {formatKw(best.reserveKw)} (
@@ -136,7 +156,7 @@ function SinglePointResultView({ result }: { result: SinglePointResult }) {
           </thead>
           <tbody>
             {result.combinations.map((c) => (
-              <tr key={c.gensetIds.join()}>
+              <tr key={c.gensetIds.join()} data-rank={c.rank} data-sets={c.designations.join('+')} data-fuel-kg-per-h={c.fuelKgPerH}>
                 <Td numeric>{c.rank}</Td>
                 <Td>{c.units.map((u) => `${u.designation} ${formatKw(u.loadKw)}`).join(', ')}</Td>
                 <Td numeric>{formatKg(c.fuelKgPerH)}/h</Td>

@@ -14,6 +14,7 @@ import { logsRouter } from './routes/logs';
 import { curvesRouter } from './routes/curves';
 import { recommendationsRouter } from './routes/recommendations';
 import { plansRouter } from './routes/plans';
+import { overhaulRouter } from './routes/overhaul';
 import { savingsRouter } from './routes/savings';
 import { fleetRouter } from './routes/fleet';
 import { reportsRouter } from './routes/reports';
@@ -58,6 +59,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(curvesRouter(deps));
   api.use(recommendationsRouter(deps));
   api.use(plansRouter(deps));
+  api.use(overhaulRouter(deps));
   api.use(savingsRouter(deps), fleetRouter(deps), reportsRouter(deps), subscriptionsRouter(deps), fuelPricesRouter(deps));
   api.use(notFoundApi);
   app.use('/api', api);

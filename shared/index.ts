@@ -9,4 +9,5 @@ export * from './schemas/logs';
 export * from './schemas/curves';
 export * from './schemas/recommendations';
 export * from './schemas/plans';
+export * from './schemas/overhaul';
 export * from './schemas/savings'; export * from './schemas/fleet'; export * from './schemas/reports';

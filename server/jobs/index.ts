@@ -8,17 +8,21 @@ import type { AppDeps, JobQueue } from '../context';
 import { listVesselCurves } from '../services/curves';
 import { previousMonth } from '../services/reports';
 import { deliverDriftAlerts, deliverMonthlyReports, systemActorOf } from '../services/subscriptions';
+import { checkOverhaulAlerts } from '../services/overhaul-alerts';
 
 export const QUEUES = {
   monthlyReports: 'monthly-reports',
   driftAlerts: 'drift-alerts',
   refitAfterImport: 'refit-after-import',
+  overhaulAlerts: 'overhaul-alerts',
 } as const;
 
 /** 06:00 UTC on the first of each month: the reports of the month before. */
 export const MONTHLY_REPORTS_CRON = '0 6 1 * *';
 /** 07:00 UTC every day. */
 export const DRIFT_ALERTS_CRON = '0 7 * * *';
+/** Every hour at :15, so a set that nears its due is reported the same day. */
+export const OVERHAUL_ALERTS_CRON = '15 * * * *';
 
 export interface MonthlyReportsJob {
   /** YYYY-MM; default the month before the job runs. */
@@ -63,6 +67,7 @@ export function createJobs(deps: AppDeps, connectionString: string, options: Job
       if (options.schedule !== false) {
         await boss.schedule(QUEUES.monthlyReports, MONTHLY_REPORTS_CRON, {}, { tz: 'UTC' });
         await boss.schedule(QUEUES.driftAlerts, DRIFT_ALERTS_CRON, {}, { tz: 'UTC' });
+        await boss.schedule(QUEUES.overhaulAlerts, OVERHAUL_ALERTS_CRON, {}, { tz: 'UTC' });
       }
       await boss.work<MonthlyReportsJob>(QUEUES.monthlyReports, workOptions, async ([job]) => {
         const month = job.data?.month ?? previousMonth(deps.now());
@@ -70,6 +75,9 @@ export function createJobs(deps: AppDeps, connectionString: string, options: Job
       });
       await boss.work(QUEUES.driftAlerts, workOptions, async () => {
         done(QUEUES.driftAlerts, await deliverDriftAlerts(deps, deps.now().toISOString().slice(0, 7)));
+      });
+      await boss.work(QUEUES.overhaulAlerts, workOptions, async () => {
+        done(QUEUES.overhaulAlerts, await checkOverhaulAlerts(deps, deps.now()));
       });
       await boss.work<RefitJob>(QUEUES.refitAfterImport, workOptions, async ([job]) => {
         const actor = await systemActorOf(deps, job.data.companyId);

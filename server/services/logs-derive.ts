@@ -89,6 +89,8 @@ export function lotLcv(grade: FuelGrade, density15KgPerM3: number, sulphurPct: n
   return { ok: true, lcvMjPerKg: estimateLcvMjPerKg({ density15KgPerM3, sulphurPct: sulphurPct ?? 0, family }), estimated: true };
 }
 
+const NON_NEGATIVE_FIELDS = ['runningHoursMeter', 'kwhMeter', 'kwh', 'fuelMassKg', 'fuelVolumeL'] as const;
+
 /**
  * Problems of one day's raw values that the derivation cannot take (they would make the optimizer throw or mean
  * nothing): missing hours or energy, fuel as both mass and volume, a volume without temperature, negative amounts,
@@ -98,7 +100,7 @@ export function rawValueIssues(v: RawLogValues, lot: LotInfo | null): Issue[] {
   const issues: Issue[] = [];
   if (v.runningHoursMeter === null && v.hoursRun === null) issues.push({ path: 'hoursRun', message: 'A running-hour meter reading or the hours run is required' });
   if (v.kwhMeter === null && v.kwh === null) issues.push({ path: 'kwh', message: 'An energy meter reading or the kWh produced is required' });
-  for (const f of ['runningHoursMeter', 'kwhMeter', 'kwh', 'fuelMassKg', 'fuelVolumeL'] as const) {
+  for (const f of NON_NEGATIVE_FIELDS) {
     const n = v[f];
     if (n !== null && (!Number.isFinite(n) || n < 0)) issues.push({ path: f, message: `${f} cannot be negative (got ${n})` });
   }

@@ -26,6 +26,9 @@ const routes: RouteObject[] = [
         children: [
           { index: true, ...page(() => import('./routes/fleet')) },
           { path: paths.vessel.pattern, ...page(() => import('./routes/vessel')) },
+          { path: paths.vesselLogs.pattern, ...page(() => import('./routes/vessel-logs')) },
+          { path: paths.vesselLogImport.pattern, ...page(() => import('./routes/vessel-logs-import')) },
+          { path: paths.vesselFuelLots.pattern, ...page(() => import('./routes/vessel-fuel-lots')) },
           { path: paths.vesselCurves.pattern, ...page(() => import('./routes/vessel-curves')) },
           { path: paths.vesselRecommend.pattern, ...page(() => import('./routes/vessel-recommend')) },
           { path: paths.vesselGuideline.pattern, ...page(() => import('./routes/vessel-guideline')) },

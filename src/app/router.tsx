@@ -38,6 +38,7 @@ const routes: RouteObject[] = [
           { path: paths.adminOutbox.pattern, ...page(() => import('./routes/admin-outbox')) },
           { path: paths.adminSettings.pattern, ...page(() => import('./routes/admin-settings')) },
           { path: paths.audit.pattern, ...page(() => import('./routes/audit')) },
+          { path: '/vessels/:vesselId/savings', ...page(() => import('./routes/savings')) },
           { path: '*', ...page(() => import('./routes/not-found')) },
         ],
       },

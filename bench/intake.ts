@@ -1,7 +1,8 @@
 /**
  * Log intake throughput: a generated 100 000-row CSV through the HTTP commit endpoint (multer upload, papaparse,
- * mapping, checks against stored rows, one-transaction bulk upsert with undo records) to committed rows, beside
- * PostgreSQL COPY of the same rows into a scratch table of the same shape, measured in the same run.
+ * mapping, checks against stored rows, and in one transaction COPY into a temporary table, one INSERT ... SELECT ...
+ * ON CONFLICT and the undo records) to committed rows, beside PostgreSQL COPY of the same rows into a scratch table
+ * of the same shape, indexes and foreign keys, measured in the same run.
  *
  * Prints `bench intake_rows_per_s <value> rows/s` and `bench intake_vs_copy_ratio <value> x` (our time over COPY's).
  * Run alone: `npx tsx bench/intake.ts` (starts a cluster in .tmp/pg-bench-intake); `npm run bench` gives it the

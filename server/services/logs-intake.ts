@@ -445,7 +445,7 @@ export async function commitUpload(deps: AppDeps, actor: Actor, vesselId: string
   if (parsed.fileSha256 !== options.fileSha256) {
     throw new AppError('conflict', 'This file differs from the one previewed; preview it again before importing', [{ path: 'fileSha256', message: 'File hash mismatch' }]);
   }
-  return deps.db.transaction(async (tx) => {
+  const committed = await deps.db.transaction(async (tx) => {
     await tx.select({ id: vessels.id }).from(vessels).where(eq(vessels.id, vesselId)).for('update');
     const { rows, modes } = await classify(tx, vesselId, parsed);
     const write = rows.filter((r) => r.status === 'new' || (r.status === 'changed' && options.overwriteChanged));
@@ -511,6 +511,9 @@ export async function commitUpload(deps: AppDeps, actor: Actor, vesselId: string
     await recordAudit(tx, actor, 'log_import', imp.id, 'create', null, { fileName: parsed.fileName, fileSha256: parsed.fileSha256, ...result });
     return result;
   });
+  // The curves behind this vessel's recommendations are refitted in the background (job queue), not on this request.
+  await deps.jobs?.enqueueRefit({ companyId: actor.companyId, vesselId });
+  return committed;
 }
 
 /** Saved mappings of a vessel, newest first. */

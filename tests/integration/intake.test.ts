@@ -524,3 +524,23 @@ describe('roles and scope', () => {
     expect((await signedOut.get(`/api/vessels/${vesselId}/logs`)).status).toBe(401);
   });
 });
+
+describe('nothing lost through the COPY path', () => {
+  it('stores remarks with tabs, backslashes, line breaks, quotes and non-ASCII text exactly', async () => {
+    const remarks = ['tab\there', 'back\\slash \\N not null', 'two\nlines\r\nand CR', 'say "hi", ok', 'Überdruck ⚠ 45 °C'];
+    const quote = (s: string) => `"${s.replace(/"/g, '""')}"`;
+    const csv = [
+      'date,genset,hours_run_h,kwh_produced_kwh,fuel_mass_kg,fuel_lot,remarks',
+      ...remarks.map((r, i) => `2026-09-1${i},DG2,10,4000,880,BDN-1,${quote(r)}`),
+    ].join('\n');
+    const res = await commit(c.chief, 'remarks.csv', csv);
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    const rows = await app.database.db
+      .select({ logDate: gensetDailyLogs.logDate, remarks: gensetDailyLogs.remarks, kwh: gensetDailyLogs.kwh, fuelMassKg: gensetDailyLogs.fuelMassKg })
+      .from(gensetDailyLogs)
+      .where(sql`${gensetDailyLogs.gensetId} = ${dg2} and ${gensetDailyLogs.logDate} between '2026-09-10' and '2026-09-14'`)
+      .orderBy(gensetDailyLogs.logDate);
+    expect(rows.map((r) => r.remarks)).toEqual(remarks);
+    expect(rows.every((r) => r.kwh === 4000 && r.fuelMassKg === 880)).toBe(true);
+  });
+});

@@ -27,7 +27,7 @@ export function navigationFor(me: Me, vessels: readonly VesselSummary[]): NavGro
   const groups: NavGroup[] = [
     {
       label: me.vesselIds === null ? 'Fleet' : vessels.length === 1 ? 'Your vessel' : 'Your vessels',
-      items: [{ key: 'fleet', label: 'Overview', href: paths.fleet.href(), end: true }, ...vesselItems],
+      items: [{ key: 'fleet', label: 'Overview', href: paths.fleet.href(), end: true }, { key: 'fleet-overhaul', label: 'Overhauls', href: paths.fleetOverhaul.href() }, ...vesselItems],
     },
   ];
   if (can(me.role, 'recommendations:run') && vessels.length > 0) groups.push({ label: 'Recommend', items: vessels.flatMap((v) => [{ key: `recommend-${v.id}`, label: `${v.name}: one load`, href: paths.vesselRecommend.href(v.id) }, { key: `guideline-${v.id}`, label: `${v.name}: guideline`, href: paths.vesselGuideline.href(v.id) }, { key: `plans-${v.id}`, label: `${v.name}: voyage plans`, href: paths.vesselPlans.href(v.id) }, { key: `rules-${v.id}`, label: `${v.name}: rules and set status`, href: paths.vesselRules.href(v.id) }]) });

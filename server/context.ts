@@ -13,6 +13,8 @@ export interface AppDeps {
     /** Allowed origin for state-changing requests and for links in e-mails; when unset, the request's own host. */
     appOrigin?: string;
     trustProxy?: string;
+    /** Folder for uploaded attachments (default .data/uploads). */
+    uploadDir?: string;
     /** Folder of the built client to serve, when it exists. */
     clientDir?: string;
   };

@@ -28,6 +28,8 @@ const envSchema = z.object({
     .enum(['true', 'false'])
     .default('false')
     .transform((v) => v === 'true'),
+  /** Folder for uploaded delivery notes and lab reports (kept out of git). */
+  KILOWATCH_UPLOAD_DIR: z.string().optional(),
   /** Express `trust proxy` setting, for a reverse proxy in front. */
   TRUST_PROXY: z.string().optional(),
 });

@@ -44,6 +44,7 @@ export async function startServer(): Promise<{ url: string; close(): Promise<voi
       cookieSecure: env.COOKIE_SECURE,
       appOrigin: env.APP_ORIGIN,
       trustProxy: env.TRUST_PROXY,
+      uploadDir: env.KILOWATCH_UPLOAD_DIR,
       clientDir: path.resolve(here, '../dist/client'),
     },
     now: () => new Date(),

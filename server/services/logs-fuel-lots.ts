@@ -17,9 +17,9 @@ import { recordAudit } from './audit';
 import { lotLcv } from './logs-derive';
 import type { UploadedFile } from './logs-intake';
 
-/** Folder of uploaded attachments (git-ignored). */
-export function uploadRoot(): string {
-  return path.resolve(process.env.KILOWATCH_UPLOAD_DIR ?? path.join(process.cwd(), '.data', 'uploads'));
+/** Folder of uploaded attachments (git-ignored): KILOWATCH_UPLOAD_DIR, parsed once in server/env.ts. */
+export function uploadRoot(deps: AppDeps): string {
+  return path.resolve(deps.config.uploadDir ?? path.join(process.cwd(), '.data', 'uploads'));
 }
 
 type LotRow = typeof fuelLots.$inferSelect;
@@ -119,7 +119,7 @@ export async function putAttachment(deps: AppDeps, actor: Actor, vesselId: strin
     throw new AppError('unsupported_media_type', 'Attach a PDF, PNG or JPEG file (its content and its name must agree)', [{ path: 'file', message: 'Not a PDF, PNG or JPEG' }]);
   }
   const relative = path.join(vessel.companyId, randomUUID());
-  const absolute = path.join(uploadRoot(), relative);
+  const absolute = path.join(uploadRoot(deps), relative);
   await mkdir(path.dirname(absolute), { recursive: true });
   await writeFile(absolute, file.buffer, { flag: 'wx' });
   const displayName = path.basename(file.originalname).replace(/[^\w.\- ]+/g, '_').slice(0, 120) || `attachment${ext}`;
@@ -136,7 +136,7 @@ export async function putAttachment(deps: AppDeps, actor: Actor, vesselId: strin
       await recordAudit(tx, actor, 'fuel_lot', lotId, 'attach', { attachmentName: before.attachmentName }, { attachmentName: displayName, attachmentType: type, bytes: file.size });
       return toLot(after);
     });
-    if (oldPath) await rm(path.join(uploadRoot(), oldPath), { force: true });
+    if (oldPath) await rm(path.join(uploadRoot(deps), oldPath), { force: true });
     return result;
   } catch (err) {
     await rm(absolute, { force: true });
@@ -149,7 +149,7 @@ export async function getAttachment(deps: AppDeps, actor: Actor, vesselId: strin
   await vesselForActor(deps.db, actor, vesselId);
   const lot = await lotOfVessel(deps.db, vesselId, lotId);
   if (!lot.attachmentPath || !lot.attachmentType) throw notFound('Attachment');
-  const root = uploadRoot();
+  const root = uploadRoot(deps);
   const absolute = path.resolve(root, lot.attachmentPath);
   if (!absolute.startsWith(root + path.sep)) throw notFound('Attachment');
   return { name: lot.attachmentName ?? 'attachment', type: lot.attachmentType, data: await readFile(absolute) };

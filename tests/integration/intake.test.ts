@@ -78,8 +78,8 @@ const V2 = [
 ].join('\n');
 
 beforeAll(async () => {
-  process.env.KILOWATCH_UPLOAD_DIR = uploads;
   app = await startTestApp();
+  app.deps.config.uploadDir = uploads;
   t = await createTenant(app, 'Petrel Lines');
   other = await createTenant(app, 'Gannet Bulk');
   vesselId = t.vesselIds[0];

@@ -19,6 +19,14 @@ const COMPANY_PAGES: CompanyPage[] = [
   { key: 'outbox', label: 'Outbox', href: paths.adminOutbox.href(), capability: 'outbox:read' },
   { key: 'settings', label: 'Settings', href: paths.adminSettings.href(), capability: 'company:settings' },
   { key: 'audit', label: 'Audit trail', href: paths.audit.href(), capability: 'audit:read' },
+  { key: 'fuel-prices', label: 'Fuel prices', href: paths.adminFuelPrices.href(), capability: 'fleet:read' },
+];
+
+// Reports and e-mail: the fleet views for roles that read reports, subscriptions for everyone.
+const REPORT_PAGES: CompanyPage[] = [
+  { key: 'fleet-benchmark', label: 'Fleet benchmark', href: paths.fleetBenchmark.href(), capability: 'reports:read' },
+  { key: 'fleet-report', label: 'Fleet report', href: paths.fleetReport.href(), capability: 'reports:read' },
+  { key: 'subscriptions', label: 'Subscriptions', href: paths.subscriptions.href(), capability: 'fleet:read' },
 ];
 
 /** The navigation one member sees: the fleet, each vessel they may open, and the company pages their role allows. */
@@ -31,6 +39,8 @@ export function navigationFor(me: Me, vessels: readonly VesselSummary[]): NavGro
     },
   ];
   if (can(me.role, 'recommendations:run') && vessels.length > 0) groups.push({ label: 'Recommend', items: vessels.flatMap((v) => [{ key: `recommend-${v.id}`, label: `${v.name}: one load`, href: paths.vesselRecommend.href(v.id) }, { key: `guideline-${v.id}`, label: `${v.name}: guideline`, href: paths.vesselGuideline.href(v.id) }, { key: `plans-${v.id}`, label: `${v.name}: voyage plans`, href: paths.vesselPlans.href(v.id) }, { key: `rules-${v.id}`, label: `${v.name}: rules and set status`, href: paths.vesselRules.href(v.id) }]) });
+  const reports = REPORT_PAGES.filter((p) => can(me.role, p.capability)).map(({ capability: _c, ...item }) => item);
+  if (reports.length > 0) groups.push({ label: 'Reports', items: reports });
   const company = COMPANY_PAGES.filter((p) => can(me.role, p.capability)).map(({ capability: _c, ...item }) => item);
   if (company.length > 0) groups.push({ label: 'Company', items: company });
   return groups;

@@ -1,23 +1,16 @@
-import { useState } from 'react';
-import { useParams } from 'react-router-dom';
+import { Link, useParams } from 'react-router-dom';
 import { SAVINGS_METHOD, type IntervalAmountView, type VesselSavingsReport } from '../../../shared/schemas/savings';
 import { LazyChart } from '../../components/charts/lazy-chart';
 import { Alert } from '../../components/ui/alert';
-import { Field, Input } from '../../components/ui/form-field';
 import { PageHeader } from '../../components/ui/page-header';
 import { Panel } from '../../components/ui/panel';
 import { EmptyState, ErrorState, LoadingState } from '../../components/ui/states';
 import { Table, Td, Th } from '../../components/ui/table';
 import { formatDate, formatHours, formatKg, formatPct, formatTonnes } from '../../lib/format';
+import { paths } from '../../config/paths';
+import { PeriodPicker, usePeriodParam } from '../../features/reports/components/period';
 import { useVesselSavings } from '../../features/savings/api/get-vessel-savings';
 import { dailySavingsOption, monthlyFuelOption } from '../../features/savings/components/savings-chart-options';
-
-function lastFullMonth(): { from: string; to: string } {
-  const now = new Date();
-  const first = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth() - 1, 1));
-  const last = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), 0));
-  return { from: first.toISOString().slice(0, 10), to: last.toISOString().slice(0, 10) };
-}
 
 const withInterval = (a: IntervalAmountView, format: (v: number) => string) => `${format(a.value)} (${format(a.lower)} to ${format(a.upper)})`;
 const money = (currency: string) => (v: number) => `${Math.round(v).toLocaleString()} ${currency}`;
@@ -113,19 +106,20 @@ function DayTable({ r }: { r: VesselSavingsReport }) {
 
 export function Component() {
   const { vesselId = '' } = useParams();
-  const [period, setPeriod] = useState(lastFullMonth);
+  const [period, setPeriod] = usePeriodParam();
   const query = useVesselSavings(vesselId, period);
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title="Savings" description="What was burned against what the recommendation would have burned, with an honest interval." />
-      <div className="flex flex-wrap gap-3 print:hidden">
-        <Field label="From" htmlFor="savings-from">
-          <Input id="savings-from" type="date" value={period.from} onChange={(e) => e.target.value && setPeriod((p) => ({ ...p, from: e.target.value }))} />
-        </Field>
-        <Field label="To" htmlFor="savings-to">
-          <Input id="savings-to" type="date" value={period.to} onChange={(e) => e.target.value && setPeriod((p) => ({ ...p, to: e.target.value }))} />
-        </Field>
-      </div>
+      <PageHeader
+        title="Savings"
+        description="What was burned against what the recommendation would have burned, with an honest interval."
+        actions={
+          <Link to={paths.vesselReport.href(vesselId, period.from.slice(0, 7))} className="text-small font-semibold underline print:hidden" data-action="open-report">
+            Monthly report
+          </Link>
+        }
+      />
+      <PeriodPicker idPrefix="savings" period={period} onChange={setPeriod} />
       {query.isPending ? (
         <LoadingState label="Costing the logged days…" />
       ) : query.isError ? (

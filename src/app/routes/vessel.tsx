@@ -70,6 +70,12 @@ function VesselPage({ vessel }: { vessel: VesselDetail }) {
             <Link to={paths.vesselRules.href(vessel.id)} className="text-small font-semibold underline" data-action="open-rules">
               Operating rules
             </Link>
+            <Link to={paths.vesselSavings.href(vessel.id)} className="text-small font-semibold underline" data-action="open-savings">
+              Savings
+            </Link>
+            <Link to={paths.vesselReport.href(vessel.id)} className="text-small font-semibold underline" data-action="open-report">
+              Monthly report
+            </Link>
             <Link to={paths.vesselOverhaul.href(vessel.id)} className="text-small font-semibold underline" data-action="open-overhaul">Running hours and overhauls</Link>
             {mayEditVessel && editing.kind !== 'vessel' ? (
               <Button variant="secondary" onClick={() => setEditing({ kind: 'vessel' })}>

@@ -1,0 +1,61 @@
+import { useSearchParams } from 'react-router-dom';
+import { Field, Input } from '../../../components/ui/form-field';
+
+const DATE = /^\d{4}-\d{2}-\d{2}$/;
+const MONTH = /^\d{4}-(0[1-9]|1[0-2])$/;
+
+/** The calendar month before the one of `now`, as YYYY-MM (UTC: log dates are ship's days). */
+export function previousMonth(now: Date = new Date()): string {
+  return new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth() - 1, 1)).toISOString().slice(0, 7);
+}
+
+/** First and last date (inclusive) of a month YYYY-MM. */
+export function monthBounds(month: string): { from: string; to: string } {
+  const [y, m] = month.split('-').map(Number);
+  return { from: `${month}-01`, to: new Date(Date.UTC(y, m, 0)).toISOString().slice(0, 10) };
+}
+
+/**
+ * The period of a page, kept in the address (?from=&to=) so it can be shared and reloaded; the previous full month
+ * when the address names none.
+ */
+export function usePeriodParam(): [{ from: string; to: string }, (next: { from: string; to: string }) => void] {
+  const [params, setParams] = useSearchParams();
+  const fallback = monthBounds(previousMonth());
+  const from = params.get('from') ?? '';
+  const to = params.get('to') ?? '';
+  const period = DATE.test(from) && DATE.test(to) ? { from, to } : fallback;
+  return [period, (next) => setParams((p) => ({ ...Object.fromEntries(p), from: next.from, to: next.to }), { replace: true })];
+}
+
+/** The month of a report page, kept in the address (?month=YYYY-MM); the previous full month by default. */
+export function useMonthParam(): [string, (month: string) => void] {
+  const [params, setParams] = useSearchParams();
+  const month = params.get('month') ?? '';
+  return [MONTH.test(month) ? month : previousMonth(), (next) => setParams((p) => ({ ...Object.fromEntries(p), month: next }), { replace: true })];
+}
+
+/** From / to date inputs of a period (hidden in print). */
+export function PeriodPicker({ period, onChange, idPrefix }: { period: { from: string; to: string }; onChange: (p: { from: string; to: string }) => void; idPrefix: string }) {
+  return (
+    <div className="flex flex-wrap items-end gap-3 print:hidden">
+      <Field label="From" htmlFor={`${idPrefix}-from`}>
+        <Input id={`${idPrefix}-from`} type="date" value={period.from} max={period.to} onChange={(e) => DATE.test(e.target.value) && onChange({ ...period, from: e.target.value })} />
+      </Field>
+      <Field label="To" htmlFor={`${idPrefix}-to`}>
+        <Input id={`${idPrefix}-to`} type="date" value={period.to} min={period.from} onChange={(e) => DATE.test(e.target.value) && onChange({ ...period, to: e.target.value })} />
+      </Field>
+    </div>
+  );
+}
+
+/** A month input (YYYY-MM; hidden in print). */
+export function MonthPicker({ month, onChange, id }: { month: string; onChange: (month: string) => void; id: string }) {
+  return (
+    <div className="print:hidden">
+      <Field label="Month" htmlFor={id}>
+        <Input id={id} type="month" value={month} onChange={(e) => MONTH.test(e.target.value) && onChange(e.target.value)} className="w-48" />
+      </Field>
+    </div>
+  );
+}

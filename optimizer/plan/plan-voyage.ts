@@ -216,15 +216,19 @@ export function planVoyage(problem: PlanProblem, options: PlanOptions = {}): Voy
         budgetsH: budgeted.map((i) => budgets[i]),
         lambdaKgPerH: budgeted.map((i) => bestLambda[i]),
         maxLabelsPerPeriod: options.maxLabelsPerPeriod ?? 40_000,
-        maxWork: options.maxLabelWork ?? 3e7,
+        maxWork: options.maxLabelWork ?? 4e6,
       };
+      const transitionsPerState = commitments.reduce((a, c) => a + c.masks.length, 0);
+      const small = transitionsPerState <= (options.exactPassMaxTransitions ?? 8_000);
       for (const width of [32, 256, 2048]) {
-        if (closedGap()) break;
+        if (closedGap() || (Number.isFinite(bestUb) && (!small || width * transitionsPerState > tracking.maxWork))) break;
         const beam = solveCommitmentDp(grid, trueCosts, { maxStates: width, bounds: { upperBoundKg: bestUb, toGoKg }, tracking });
         if (beam.masks) candidate(beam.masks, beam.costKg, new Array<number>(n).fill(0));
       }
       progress(0.75);
-      const exactRes = solveCommitmentDp(grid, trueCosts, { maxStates: Number.MAX_SAFE_INTEGER, bounds: { upperBoundKg: bestUb, toGoKg }, tracking });
+      const exactRes = !small
+        ? { masks: null, costKg: Infinity, exact: false, aborted: true }
+        : solveCommitmentDp(grid, trueCosts, { maxStates: Number.MAX_SAFE_INTEGER, bounds: { upperBoundKg: bestUb, toGoKg }, tracking });
       if (!exactRes.aborted) {
         if (exactRes.masks && exactRes.costKg < bestUb) {
           bestMasks = exactRes.masks;

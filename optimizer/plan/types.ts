@@ -90,8 +90,13 @@ export interface PlanOptions {
   maxPriceIterations?: number;
   /** Most labels per period in the exact budget-tracking pass before it gives up. Default 40000. */
   maxLabelsPerPeriod?: number;
-  /** Most label extensions of the exact budget-tracking pass in total. Default 3e7. */
+  /** Most label extensions of a budget-tracking pass (repair beams and the exact pass) in total. Default 4e6. */
   maxLabelWork?: number;
+  /**
+   * The budget-tracking beams beyond the first and the exact pass run only when the plan has at most this
+   * many commitments summed over its periods. Default 8000 (a week of hourly periods with ~50 options each).
+   */
+  exactPassMaxTransitions?: number;
   /** Most DP states per period before the plan stops being exact (beam). Default 200000. */
   maxStatesPerPeriod?: number;
 }

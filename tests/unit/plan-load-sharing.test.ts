@@ -52,7 +52,7 @@ describe('shareLoad against HiGHS', () => {
       const lp = `Minimize\n obj: ${lin} + [ ${quad} ] / 2\nSubject To\n bal: ${models.map((_, i) => `+ p${i}`).join(' ')} = ${loadKw / 1e3}\nBounds\n${models.map((m, i) => ` ${m.minKw / 1e3} <= p${i} <= ${m.maxKw / 1e3}`).join('\n')}\nEnd\n`;
       const ref = highs.solve(lp, { output_flag: false, time_limit: 5 });
       expect(ref.Status, `seed ${seed}`).toBe('Optimal');
-      const refFuel = models.reduce((s, m, i) => s + modelFuelKgPerH(m, 1e3 * ref.Columns[`p${i}`].Primal), 0);
+      const refFuel = models.reduce((s, m, i) => s + modelFuelKgPerH(m, 1e3 * (ref.Columns[`p${i}`] as { Primal: number }).Primal), 0);
       expect(Math.abs(ours.fuelKgPerH - refFuel) / refFuel, `seed ${seed}`).toBeLessThan(FUEL_REL_TOL);
       expect(Math.abs(ours.loadsKw.reduce((a, b) => a + b, 0) - loadKw)).toBeLessThan(1e-6 * loadKw);
     }

@@ -46,7 +46,7 @@ afterAll(async () => {
 });
 
 describe('log intake for a chief engineer', () => {
-  it('pages and filters the own log, imports a CSV through the wizard with a row error shown, and undoes it', async () => {
+  it('pages and filters the own log, imports a CSV through the wizard with a row error shown, undoes it, and opens the fuel lots', async () => {
     const { context, page, outsideRequests } = await freshPage(browser);
     page.on('dialog', (d) => void d.accept());
     try {
@@ -143,6 +143,17 @@ describe('log intake for a chief engineer', () => {
       await page.getByRole('link', { name: 'Back to the log' }).click();
       await expect.poll(async () => daysIn(await pagerText(page))).toBe(all.total);
       expect((await apiLogs(page, vesselId, 'pageSize=1')).total).toBe(all.total);
+
+      // The fuel lots the log refers to: every lot with its density and LCV in their units.
+      await page.getByRole('link', { name: 'Fuel lots', exact: true }).click();
+      await expect.poll(() => page.locator('h1').textContent()).toBe('Fuel lot register');
+      const lots = page.locator('table', { has: page.locator('caption', { hasText: 'Fuel lots' }) }).locator('tbody tr');
+      await lots.first().waitFor();
+      const lotCells = await lots.evaluateAll((trs) => trs.map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent ?? '')));
+      for (const l of lotCells) {
+        expect(l[3]).toMatch(/\d\u00a0kg\/m³$/);
+        expect(l[4]).toMatch(/\d\u00a0MJ\/kg/);
+      }
       expect(outsideRequests).toEqual([]);
     } finally {
       await context.close();

@@ -120,6 +120,11 @@ export function Component() {
                     <>
                       <LazyChart option={timelineOption(withItems, o.windows)} heightPx={80 + 46 * withItems.length} label={`Forecast due dates of ${withItems.length} sets with ${o.windows.length} work windows shaded`} />
                       <DueTable sets={withItems} windows={o.windows} />
+                      {o.sets.some((s) => s.items.length === 0) ? (
+                        <p className="text-small text-hull-600" data-note="sets-without-intervals">
+                          No maintenance intervals entered for {o.sets.filter((s) => s.items.length === 0).map((s) => s.designation).join(', ')}: enter them in the vessel register to see their due dates.
+                        </p>
+                      ) : null}
                       {o.planName ? <p className="text-caption text-hull-500">Under voyage plan “{o.planName}” from {formatDate(o.planStartDate)}; after it ends, the recent usage.</p> : null}
                     </>
                   )}

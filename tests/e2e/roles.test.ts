@@ -5,14 +5,15 @@ import { DEMO_SIGN_INS } from '../../seed/scenario';
 import { freshPage, launchBrowser } from './browser';
 
 // What each role must see in the navigation. Written out by hand from the capability table in shared/roles.ts
-// (users:manage, outbox:read, company:settings, audit:read), so a change to either side shows up here.
-const COMPANY_LINKS = ['users', 'outbox', 'settings', 'audit'] as const;
+// (users:manage, outbox:read, company:settings, audit:read; reports:read for the fleet benchmark and fleet report;
+// fleet:read, i.e. everyone, for fuel prices and subscriptions), so a change to either side shows up here.
+const COMPANY_LINKS = ['users', 'outbox', 'settings', 'audit', 'fuel-prices', 'fleet-benchmark', 'fleet-report', 'subscriptions'] as const;
 const EXPECTED_COMPANY_LINKS: Record<string, readonly (typeof COMPANY_LINKS)[number][]> = {
-  admin: ['users', 'outbox', 'settings', 'audit'],
-  superintendent: ['audit'],
-  chief_engineer: [],
-  energy_officer: [],
-  planner: [],
+  admin: ['users', 'outbox', 'settings', 'audit', 'fuel-prices', 'fleet-benchmark', 'fleet-report', 'subscriptions'],
+  superintendent: ['audit', 'fuel-prices', 'fleet-benchmark', 'fleet-report', 'subscriptions'],
+  chief_engineer: ['fuel-prices', 'subscriptions'],
+  energy_officer: ['fuel-prices', 'fleet-benchmark', 'fleet-report', 'subscriptions'],
+  planner: ['fuel-prices', 'subscriptions'],
 };
 
 const ALL_VESSEL_NAMES = DEMO_VESSELS.map((v) => v.name).sort();

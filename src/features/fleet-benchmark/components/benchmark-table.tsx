@@ -99,7 +99,7 @@ export function BenchmarkTable<T extends object>({ caption, data, columns, numer
             rows.map((r) => (
               <tr key={r.id} data-row={rowKey(r.original)}>
                 {r.getAllCells().map((c) => (
-                  <Td key={c.id} numeric={numeric.includes(c.column.id)} title={how[c.column.id]}>
+                  <Td key={c.id} numeric={numeric.includes(c.column.id)} title={how[c.column.id]} data-col={c.column.id}>
                     <table.FlexRender cell={c} />
                   </Td>
                 ))}

@@ -7,3 +7,5 @@ export * from './logs/index';
 export * from './fit/index';
 export * from './savings/index';
 export * from './dispatch/index';
+export * from './plan/index';
+export { loadHighs } from './highs';

@@ -21,7 +21,7 @@ export type {
   SectionDispatch,
   UnitReason,
 } from './combinations';
-export { buildSinglePointMilp, loadHighs, solveSinglePointMilp } from './milp';
+export { buildSinglePointMilp, solveSinglePointMilp } from './milp';
 export type { LpSolver, MilpResult, SinglePointMilp } from './milp';
 export { operatingGuideline } from './guideline';
 export type { GuidelineAlternative, GuidelineBand, GuidelineGap, GuidelineOptions, OperatingGuideline } from './guideline';

@@ -134,11 +134,12 @@ export function buildSinglePointMilp(units: GensetUnit[], demand: Demand, rule: 
  * const highs = await loadHighs();
  * solveSinglePointMilp(highs, units, 1200, rule) // { feasible: true, fuelKgPerH: 262.4, onIds: ['DG1', 'DG2'], ... }
  */
-export function solveSinglePointMilp(solver: LpSolver, units: GensetUnit[], demand: Demand, rule: ReserveRule): MilpResult {
+export function solveSinglePointMilp(solver: LpSolver | Highs, units: GensetUnit[], demand: Demand, rule: ReserveRule): MilpResult {
   const model = buildSinglePointMilp(units, demand, rule);
   if (model.lp === null) return { feasible: false, status: 'Infeasible' };
   if (model.columns.length === 0) return { feasible: true, fuelKgPerH: 0, onIds: [], loadsKw: {} };
-  const solution = solver.solve(model.lp, EXACT_OPTIONS);
+  // HiGHS's own result type is a union over statuses; only an optimal one is read, so the narrow view suffices.
+  const solution = (solver as LpSolver).solve(model.lp, EXACT_OPTIONS);
   if (solution.Status !== 'Optimal') return { feasible: false, status: solution.Status };
   const value = (name: string): number => solution.Columns[name]?.Primal ?? 0;
   const onIds: string[] = [];
@@ -151,15 +152,5 @@ export function solveSinglePointMilp(solver: LpSolver, units: GensetUnit[], dema
   return { feasible: true, fuelKgPerH: solution.ObjectiveValue, onIds, loadsKw };
 }
 
-/**
- * Loads the HiGHS WebAssembly solver by dynamic import (npm `highs`), so bundles that never call it do not
- * load it. Pass loader options such as `locateFile` in a browser.
- *
- * Cost: one module instantiation (tens of milliseconds). Throws when the package cannot be loaded.
- *
- * @example const highs = await loadHighs(); highs.solve('Minimize\n obj: x\nBounds\n x >= 1\nEnd')
- */
-export async function loadHighs(loaderOptions: Record<string, unknown> = {}): Promise<LpSolver> {
-  const module = await import('highs');
-  return (await module.default(loaderOptions)) as unknown as LpSolver;
-}
+export { loadHighs } from '../highs';
+import type { Highs } from 'highs';

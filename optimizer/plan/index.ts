@@ -1,7 +1,7 @@
 // Public API of the voyage plan (many periods: unit commitment and load sharing). The lead wires this into
 // optimizer/index.ts.
 export { planVoyage, validatePlanProblem } from './plan-voyage';
-export { solvePlanMilp, buildPlanMilp, loadHighs } from './plan-milp';
+export { solvePlanMilp, buildPlanMilp } from './plan-milp';
 export type { MilpModel, MilpOptions } from './plan-milp';
 export { checkPlan } from './check-plan';
 export type { CheckTolerances, PlanCheck } from './check-plan';

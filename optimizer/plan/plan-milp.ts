@@ -1,6 +1,6 @@
 /**
  * The voyage plan as a mixed-integer linear programme for HiGHS (npm `highs`, WebAssembly), to certify plans
- * of the decomposition. The only file of the optimizer that loads `highs`, lazily.
+ * of the decomposition. The only file of the plan solver that solves with `highs` (loaded lazily by optimizer/highs.ts).
  *
  * Formulation (standard three-binary unit commitment; Wood & Wollenberg, Power Generation, Operation and
  * Control, 2nd ed., chapter 5, with the minimum up/down inequalities of Rajan & Takriti, IBM research report
@@ -13,6 +13,8 @@ import { loadGroups, periodCommitments, reserveMarginKw } from './period-options
 import { buildPlan, infeasiblePlan } from './plan-output';
 import { infeasiblePeriodsOf, validatePlanProblem } from './plan-voyage';
 import type { PlanProblem, VoyagePlan } from './types';
+import { loadHighs } from '../highs';
+export { loadHighs };
 
 export interface MilpOptions {
   /** HiGHS time limit, s. Default 60. */
@@ -36,16 +38,6 @@ export interface MilpModel {
 
 const EPS_H = 1e-9;
 
-/**
- * Loads the HiGHS WebAssembly solver (dynamic import, so the optimizer stays loadable without it).
- *
- * Cost: one module load and Wasm compile. Throws when the package cannot be loaded.
- *
- * @example const highs = await loadHighs(); await solvePlanMilp(problem, { highs })
- */
-export async function loadHighs(): Promise<Highs> {
-  return (await import('highs')).default();
-}
 
 function num(x: number): string {
   return Number.isInteger(x) ? String(x) : x.toPrecision(15);

@@ -28,13 +28,13 @@ function apiLogs(page: Page, vesselId: string, query: string): Promise<LogPage> 
   return page.evaluate(async ({ id, q }) => (await (await fetch(`/api/vessels/${id}/logs?${q}`)).json()) as LogPage, { id: vesselId, q: query });
 }
 
-/** "Page 1 of 31 · 1 520 days" under the log table. */
+/** "Page 1 of 31 · 1 520 set-days (one row per set and day)" under the log table. */
 async function pagerText(page: Page): Promise<string> {
   const p = page.locator('span', { hasText: /^Page \d+ of \d+/ });
   await p.first().waitFor();
   return (await p.first().textContent()) ?? '';
 }
-const daysIn = (pager: string) => Number(/·\s*([\d,\s\u00a0]+)\s*days/.exec(pager)?.[1].replace(/[^\d]/g, ''));
+const daysIn = (pager: string) => Number(/·\s*([\d,\s\u00a0]+)\s*set-days?/.exec(pager)?.[1].replace(/[^\d]/g, ''));
 const logTable = (page: Page) => page.locator('table', { has: page.locator('caption', { hasText: 'Daily genset log with derived figures' }) });
 
 let browser: Browser;
@@ -126,7 +126,7 @@ describe('log intake for a chief engineer', () => {
       expect(await newRow.locator('td').allTextContents()).toEqual(expect.arrayContaining(['2', missing.designation, missing.date, 'new', '20.0\u00a0h', '24000\u00a0kWh']));
       expect(await page.getByText('1 with errors (not imported)').count()).toBe(1);
 
-      await page.getByRole('button', { name: 'Import 1 rows' }).click();
+      await page.getByRole('button', { name: 'Import 1 row' }).click();
       await page.getByText(/Imported: 1 new, 0 overwritten, 0 unchanged, 1 rejected/).waitFor();
       const history = page.locator('table', { has: page.locator('caption', { hasText: 'Import history' }) });
       const imported = history.locator('tbody tr', { hasText: 'e2e-missing-day.csv' });

@@ -185,7 +185,10 @@ export function ImportWizard({ vesselId }: { vesselId: string }) {
               </label>
             ) : null}
             <Button onClick={commit} pending={committing.isPending} pendingLabel="Importing…" disabled={busy}>
-              Import {preview.counts.new + (overwrite ? preview.counts.changed : 0)} rows
+              {(() => {
+                const n = preview.counts.new + (overwrite ? preview.counts.changed : 0);
+                return `Import ${n} ${n === 1 ? 'row' : 'rows'}`;
+              })()}
             </Button>
           </div>
         </>

@@ -169,7 +169,7 @@ export function LogTable({ vesselId, sets, mayEdit, onEdit, onExclude, onDelete,
               <div className="flex items-center gap-3 text-small">
                 <Button size="sm" variant="secondary" disabled={q.page <= 1} onClick={() => setQ((o) => ({ ...o, page: o.page - 1 }))}>Previous</Button>
                 <span>
-                  Page {data.page} of {pages} · {data.total} days
+                  Page {data.page} of {pages} · {data.total} {data.total === 1 ? 'set-day' : 'set-days'} (one row per set and day)
                 </span>
                 <Button size="sm" variant="secondary" disabled={q.page >= pages} onClick={() => setQ((o) => ({ ...o, page: o.page + 1 }))}>Next</Button>
               </div>

@@ -35,6 +35,8 @@ export interface RawDailyLog {
   runningHours: RunningHoursEntry;
   energy: EnergyEntry;
   fuel: FuelEntry;
+  /** Length of this ship's day when it is not 24 h (clocks advanced or retarded: 23 or 25 h); overrides the context's. */
+  dayLengthH?: number;
 }
 
 /** The fuel lot (bunker delivery) the set burned that day. */
@@ -208,7 +210,7 @@ export function deriveDailyRow(raw: RawDailyLog, context: DailyRowContext): Deri
   if (!(requireFinite('sfocBandGPerKwh.min', band.min) < requireFinite('sfocBandGPerKwh.max', band.max))) {
     throw new Error(`${FN} requires sfocBandGPerKwh.min < sfocBandGPerKwh.max`);
   }
-  const dayLengthH = requireFinite('context.dayLengthH', context.dayLengthH ?? 24);
+  const dayLengthH = requireFinite('dayLengthH', raw.dayLengthH ?? context.dayLengthH ?? 24);
   if (dayLengthH < 20 || dayLengthH > 28) throw new Error(`${FN} requires context.dayLengthH between 20 and 28 h (got ${dayLengthH})`);
   const { lot } = context;
   const flags: QualityFlag[] = [];

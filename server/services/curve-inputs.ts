@@ -83,6 +83,7 @@ export async function loadCurveInputs(db: DbOrTx, vesselId: string, gensetId?: s
       ctx.lotsById,
       ctx.lotsByDate,
       ctx.replacements.get(set.id) ?? new Map(),
+      { dayLengthsH: ctx.dayLengthsH },
     );
     const days: CurveInputDay[] = mine.map((s) => {
       const d = byDate.get(s.logDate)?.derived;

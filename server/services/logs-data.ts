@@ -1,9 +1,9 @@
 /** Loading what log derivation needs for a vessel: its sets, fuel lots, meter replacements and stored days. */
-import { and, asc, eq, gte, inArray, lte } from 'drizzle-orm';
+import { and, asc, eq, gte, inArray, lte, sql } from 'drizzle-orm';
 import type { MeterReplacement } from '../../optimizer/index';
 import type { RawLogValues } from '../../shared/schemas/logs';
 import type { DbOrTx } from '../db/client';
-import { fuelLots, gensetDailyLogs, gensets, meterReplacements } from '../db/schema';
+import { fuelLots, gensetDailyLogs, gensets, meterReplacements, vesselModeHours } from '../db/schema';
 import type { LotInfo, SetInfo } from './logs-derive';
 
 export type StoredLog = typeof gensetDailyLogs.$inferSelect;
@@ -37,6 +37,8 @@ export interface VesselLogContext {
   lotsByDate: LotInfo[];
   /** Per set: 'meter|date' → replacement. */
   replacements: Map<string, Map<string, MeterReplacement>>;
+  /** Ship's days that are not 24 h long (clocks changed), from the day's operating-mode hours. */
+  dayLengthsH: Map<string, number>;
 }
 
 export async function loadVesselLogContext(db: DbOrTx, vesselId: string): Promise<VesselLogContext> {
@@ -63,7 +65,21 @@ export async function loadVesselLogContext(db: DbOrTx, vesselId: string): Promis
     m.set(`${r.meter}|${r.replacedOn}`, { oldFinalReading: r.oldFinalReading, newStartReading: r.newStartReading });
     replacements.set(r.gensetId, m);
   }
+  // A day whose mode hours add to 23 or 25 h is a clock-change day; its sets may log that many hours.
+  const oddDays = await db
+    .select({
+      logDate: vesselModeHours.logDate,
+      totalH: sql<number>`${vesselModeHours.seaH} + ${vesselModeHours.manoeuvringH} + ${vesselModeHours.portH} + ${vesselModeHours.anchorageH} + ${vesselModeHours.shorePowerH}`.mapWith(Number),
+    })
+    .from(vesselModeHours)
+    .where(
+      and(
+        eq(vesselModeHours.vesselId, vesselId),
+        sql`abs(${vesselModeHours.seaH} + ${vesselModeHours.manoeuvringH} + ${vesselModeHours.portH} + ${vesselModeHours.anchorageH} + ${vesselModeHours.shorePowerH} - 24) between 0.5 and 4`,
+      ),
+    );
   return {
+    dayLengthsH: new Map(oddDays.map((d) => [d.logDate, d.totalH])),
     sets,
     setsById: new Map(sets.map((s) => [s.id, s])),
     lotsById: new Map(lotInfos.map((l) => [l.id, l])),

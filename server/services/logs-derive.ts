@@ -161,7 +161,7 @@ export function deriveSetDays(
   lotsById: Map<string, LotInfo>,
   lotsByDate: LotInfo[],
   replacements: Map<string, MeterReplacement>,
-  options: { from?: string; to?: string } = {},
+  options: { from?: string; to?: string; dayLengthsH?: Map<string, number> } = {},
 ): { byDate: Map<string, SetDayDerived>; missingDays: string[] } {
   const sorted = [...days].sort((a, b) => (a.logDate < b.logDate ? -1 : a.logDate > b.logDate ? 1 : 0));
   const byDate = new Map<string, SetDayDerived>();
@@ -183,9 +183,11 @@ export function deriveSetDays(
     const extra: LogFlag[] = [];
     if (assumed && lot) extra.push(flag('FUEL_LOT_ASSUMED', 'fuelLotId', `No lot logged; lot ${lot.reference} (delivered ${lot.deliveredOn}) is assumed.`));
     if (!lot && fuelLogged) extra.push(flag('FUEL_LOT_MISSING', 'fuelLotId', 'No fuel lot is registered for this day; fuel mass, SFOC and CO2 need one.'));
+    const dayLengthH = options.dayLengthsH?.get(day.logDate);
     const raw: RawDailyLog = {
       date: day.logDate,
       gensetId: set.id,
+      ...(dayLengthH !== undefined ? { dayLengthH } : {}),
       runningHours: useHoursMeter
         ? { kind: 'cumulative', readingH: v.runningHoursMeter as number, ...(hoursRep ? { replacement: hoursRep } : {}) }
         : { kind: 'run', hoursRun: v.hoursRun as number },

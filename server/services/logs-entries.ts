@@ -49,6 +49,7 @@ async function derivedRows(db: DbOrTx, vesselId: string, q: { gensetId?: string;
       ctx.lotsById,
       ctx.lotsByDate,
       ctx.replacements.get(set.id) ?? new Map(),
+      { dayLengthsH: ctx.dayLengthsH },
     );
     for (const date of missing) if ((!q.from || date >= q.from) && (!q.to || date <= q.to)) missingDays.push({ gensetId: set.id, designation: set.designation, date });
     for (const s of inRange) {

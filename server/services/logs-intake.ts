@@ -290,7 +290,7 @@ export async function previewUpload(deps: AppDeps, actor: Actor, vesselId: strin
         any = true;
       }
     }
-    if (any) derivedBy.set(set.id, deriveSetDays(set, [...days.values()], context.lotsById, context.lotsByDate, context.replacements.get(set.id) ?? new Map()).byDate);
+    if (any) derivedBy.set(set.id, deriveSetDays(set, [...days.values()], context.lotsById, context.lotsByDate, context.replacements.get(set.id) ?? new Map(), { dayLengthsH: context.dayLengthsH }).byDate);
   }
   const previewRows: PreviewRow[] = rows.map((r) => {
     const d = r.file.gensetId && r.file.logDate && r.values ? derivedBy.get(r.file.gensetId)?.get(r.file.logDate) : undefined;

@@ -105,6 +105,7 @@ export async function loadVesselSavingsData(deps: AppDeps, actor: Actor, vesselI
       ctx.lotsById,
       ctx.lotsByDate,
       ctx.replacements.get(set.id) ?? new Map(),
+      { dayLengthsH: ctx.dayLengthsH },
     );
     for (const s of mine) {
       if (s.logDate < from || s.logDate > to) continue;

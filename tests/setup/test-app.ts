@@ -40,7 +40,7 @@ export interface HttpClient {
   post<T = any>(path: string, body?: unknown): Promise<HttpResponse<T>>;
   patch<T = any>(path: string, body?: unknown): Promise<HttpResponse<T>>;
   delete<T = any>(path: string): Promise<HttpResponse<T>>;
-  signIn(email: string, password?: string): Promise<HttpResponse>;
+  signIn(email: string, password?: string): Promise<HttpResponse<any>>;
 }
 
 export async function startTestApp(): Promise<TestApp> {

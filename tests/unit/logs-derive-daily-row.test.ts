@@ -191,6 +191,12 @@ describe('quality flags: each fires, and none on a clean row', () => {
     ['LOW_LOAD', () => run({ energy: { kind: 'cumulative', readingKwh: 5_004_000 }, fuel: { kind: 'mass', value: 1, unit: 't' } })],
     ['FUEL_WITHOUT_HOURS', () => run({ ...hoursRun(0), energy: { kind: 'produced', kwh: 0 }, fuel: { kind: 'mass', value: 50, unit: 'kg' } })],
   ];
+  it('a 25 h ship\'s day (clocks retarded) carries 25 h without HOURS_OVER_24; 26 h still flags (common practice)', () => {
+    const long = { ...hoursRun(25), energy: { kind: 'produced' as const, kwh: 15_000 }, fuel: { kind: 'mass' as const, value: 3300, unit: 'kg' as const } };
+    expect(codes(run({ ...long, dayLengthH: 25 }))).toEqual([]);
+    expect(codes(run({ ...long, runningHours: { kind: 'run', hoursRun: 26 }, dayLengthH: 25 }))).toEqual(['HOURS_OVER_24']);
+    expect(codes(run({ ...hoursRun(24), energy: long.energy, fuel: long.fuel, dayLengthH: 23 }))).toEqual(['HOURS_OVER_24']);
+  });
   for (const [code, make] of cases) {
     it(`${code} fires alone, with field and message`, () => {
       const row = make();

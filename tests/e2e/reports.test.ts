@@ -110,6 +110,50 @@ describe('reports for an energy officer', () => {
       const csv = await page.evaluate(async (u) => (await fetch(u)).text(), csvHref ?? '');
       expect(csv).toContain(SAVINGS_CAUTION);
 
+      // On paper (print media): the navigation, the month picker and the download links are gone; the caution stays.
+      await page.emulateMedia({ media: 'print' });
+      expect(await page.locator('nav[aria-label="Main"]').isVisible()).toBe(false);
+      expect(await page.locator('[data-download="csv"]').isVisible()).toBe(false);
+      expect(await page.locator('#report-month').isVisible()).toBe(false);
+      expect(await sheet.locator('[data-report-caution]').isVisible()).toBe(true);
+      await page.emulateMedia({ media: 'screen' });
+
+      expect(outsideRequests).toEqual([]);
+    } finally {
+      await context.close();
+    }
+  });
+
+  it('subscribes to a vessel report and unsubscribes; reads the fuel prices without editing them', async () => {
+    const { context, page, outsideRequests } = await freshPage(browser);
+    try {
+      await signIn(page, ENERGY.email, ENERGY.password);
+      await page.locator('[data-nav="subscriptions"]').click();
+      await expect.poll(() => page.locator('h1').textContent()).toBe('Subscriptions');
+      const form = page.locator('[data-form="subscribe"]');
+      await form.waitFor();
+      // An energy officer may receive the fleet report (reports:read in shared/roles.ts).
+      expect(await page.locator('#sub-kind option[value="fleet_monthly_report"]').count()).toBe(1);
+      await page.locator('#sub-kind').selectOption('vessel_monthly_report');
+      const vesselName = (await page.locator('#sub-vessel option:checked').textContent())?.trim() ?? '';
+      const before = await page.locator('tr[data-subscription="vessel_monthly_report"]').count();
+      await form.getByRole('button', { name: 'Subscribe', exact: true }).click();
+      const row = page.locator('tr[data-subscription="vessel_monthly_report"]', { hasText: vesselName });
+      await row.waitFor();
+      expect(await page.locator('tr[data-subscription="vessel_monthly_report"]').count()).toBe(before + 1);
+      // Overhaul alerts take hours before due, in h.
+      await page.locator('#sub-kind').selectOption('overhaul_alert');
+      expect(await page.locator('#sub-hours').isVisible()).toBe(true);
+      await row.locator('[data-action="unsubscribe"]').click();
+      await expect.poll(() => page.locator('tr[data-subscription="vessel_monthly_report"]', { hasText: vesselName }).count()).toBe(0);
+
+      await page.locator('[data-nav="fuel-prices"]').click();
+      await expect.poll(() => page.locator('h1').textContent()).toBe('Fuel prices');
+      await page.locator('[data-price], [data-state="empty"]').first().waitFor();
+      // Reading only: the form is for administrators (company:settings).
+      expect(await page.locator('[data-form="fuel-price"]').count()).toBe(0);
+      for (const price of await page.locator('[data-price] td:nth-child(4)').allTextContents()) expect(price).toMatch(/\/t$/);
+
       expect(outsideRequests).toEqual([]);
     } finally {
       await context.close();

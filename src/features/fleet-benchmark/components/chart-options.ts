@@ -35,9 +35,10 @@ export function avoidableRankingOption(b: FleetBenchmark): EChartsOption {
         return `${v.vesselName}<br/>Avoidable fuel: ${v.avoidablePct?.toFixed(1)} %${t ? `, ${t.value.toFixed(2)} t (${t.lower.toFixed(2)} to ${t.upper.toFixed(2)} t)` : ''}`;
       },
     },
-    grid: { left: 140, right: 32, top: 16, bottom: 48 },
+    grid: { left: 140, right: 32, top: 32, bottom: 48 },
     xAxis: { type: 'value', name: 'Avoidable fuel (% of modelled actual)', nameLocation: 'middle', nameGap: 30, axisLabel: { formatter: '{value} %' } },
-    yAxis: { type: 'category', inverse: true, data: ranked.map((v) => v.vesselName), name: 'Vessel' },
+    // inverse: the first vessel on top, so the axis start (and its title) is at the top.
+    yAxis: { type: 'category', inverse: true, data: ranked.map((v) => v.vesselName), name: 'Vessel', nameLocation: 'start' },
     series: [{ name: 'Avoidable fuel (%)', type: 'bar', data: ranked.map((v) => v.avoidablePct) }],
   };
 }

@@ -106,7 +106,8 @@ export function rawValueIssues(v: RawLogValues, lot: LotInfo | null): Issue[] {
   }
   if (v.hoursRun !== null && !Number.isFinite(v.hoursRun)) issues.push({ path: 'hoursRun', message: 'Hours run is not a number' });
   if (v.fuelMassKg !== null && v.fuelVolumeL !== null) issues.push({ path: 'fuelVolumeL', message: 'Fuel is given as both a mass and a volume; keep one' });
-  if (v.fuelVolumeL !== null) {
+  // A zero volume (set stopped) needs no temperature: there is nothing to correct.
+  if (v.fuelVolumeL !== null && v.fuelVolumeL > 0) {
     if (v.fuelTempC === null) issues.push({ path: 'fuelTempC', message: 'A fuel volume needs its temperature for the correction to 15 °C' });
     else if (lot) {
       const lo = TABLE_54B_BANDS[0].fromKgPerM3;
@@ -193,7 +194,7 @@ export function deriveSetDays(
         : { kind: 'run', hoursRun: v.hoursRun as number },
       energy: useKwhMeter ? { kind: 'cumulative', readingKwh: v.kwhMeter as number, ...(kwhRep ? { replacement: kwhRep } : {}) } : { kind: 'produced', kwh: v.kwh as number },
       fuel:
-        lot && v.fuelVolumeL !== null
+        lot && v.fuelVolumeL !== null && v.fuelVolumeL > 0
           ? { kind: 'volume', value: v.fuelVolumeL, unit: 'L', tempC: v.fuelTempC as number }
           : { kind: 'mass', value: lot && v.fuelMassKg !== null ? v.fuelMassKg : 0, unit: 'kg' },
     };

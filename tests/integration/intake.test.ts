@@ -544,3 +544,21 @@ describe('nothing lost through the COPY path', () => {
     expect(rows.every((r) => r.kwh === 4000 && r.fuelMassKg === 880)).toBe(true);
   });
 });
+
+describe('a stopped set logged by volume', () => {
+  it('a day with 0 L and no temperature keeps its meters, so the next running day is derived', async () => {
+    const csv = [
+      'date,genset,running_hours_meter_h,kwh_meter_kwh,fuel_volume_l,fuel_temp_c,fuel_lot',
+      '2026-09-20,DG2,2000,90000,,,BDN-1',
+      '2026-09-21,DG2,2000,90000,0,,BDN-1',
+      '2026-09-22,DG2,2010,94000,1100,40,BDN-1',
+    ].join('\n');
+    const res = await commit(c.chief, 'stopped.csv', csv);
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    const list = await c.chief.get(`/api/vessels/${vesselId}/logs?gensetId=${dg2}&from=2026-09-21&to=2026-09-22&sort=logDate&dir=asc`);
+    const [stopped, running] = list.body.rows;
+    expect(stopped.derived).toMatchObject({ hoursRun: 0, kwh: 0 });
+    expect(running.derived).toMatchObject({ hoursRun: 10, kwh: 4000 });
+    expect(running.derived.fuelKgAt15).toBeGreaterThan(0);
+  });
+});

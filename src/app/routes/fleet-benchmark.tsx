@@ -4,14 +4,15 @@ import { LazyChart } from '../../components/charts/lazy-chart';
 import { Alert } from '../../components/ui/alert';
 import { PageHeader } from '../../components/ui/page-header';
 import { Panel } from '../../components/ui/panel';
-import { EmptyState, QueryView } from '../../components/ui/states';
+import { EmptyState, LoadingState, QueryView } from '../../components/ui/states';
 import { paths } from '../../config/paths';
 import { formatDate, formatKw } from '../../lib/format';
 import { useFleetBenchmark } from '../../features/fleet-benchmark/api/get-fleet-benchmark';
 import { BenchmarkTable } from '../../features/fleet-benchmark/components/benchmark-table';
 import { avoidableRankingOption, monthlyTrendOption, sisterCurvesOption } from '../../features/fleet-benchmark/components/chart-options';
 import { howByColumn, SET_NUMERIC, setColumns, VESSEL_NUMERIC, vesselColumns } from '../../features/fleet-benchmark/components/columns';
-import { PeriodPicker, usePeriodParam } from '../../features/reports/components/period';
+import { latestDate, PeriodPicker, usePeriodParam } from '../../features/reports/components/period';
+import { useVessels } from '../../features/vessels/api/get-vessels';
 import { RequireCapability } from '../signed-in';
 
 function Method({ text }: { text: string | undefined }) {
@@ -72,8 +73,8 @@ function Benchmark({ b }: { b: FleetBenchmark }) {
   );
 }
 
-function BenchmarkPage() {
-  const [period, setPeriod] = usePeriodParam();
+function BenchmarkPage({ latestLogDate }: { latestLogDate: string | null }) {
+  const [period, setPeriod] = usePeriodParam(latestLogDate);
   const query = useFleetBenchmark(period);
   return (
     <div className="flex flex-col gap-4">
@@ -99,11 +100,18 @@ function BenchmarkPage() {
   );
 }
 
+/** Opens on the month of the fleet's latest logged day. */
+function BenchmarkOnLatestMonth() {
+  const vessels = useVessels();
+  if (vessels.isPending) return <LoadingState label="Finding the latest logged month…" />;
+  return <BenchmarkPage latestLogDate={latestDate((vessels.data ?? []).map((v) => v.lastLogDate))} />;
+}
+
 /** Fleet benchmarking for superintendents, energy officers and administrators. */
 export function Component() {
   return (
     <RequireCapability capability="reports:read" title="Fleet benchmark">
-      <BenchmarkPage />
+      <BenchmarkOnLatestMonth />
     </RequireCapability>
   );
 }

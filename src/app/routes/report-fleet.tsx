@@ -1,13 +1,14 @@
 import { Button } from '../../components/ui/button';
 import { PageHeader } from '../../components/ui/page-header';
-import { QueryView } from '../../components/ui/states';
+import { LoadingState, QueryView } from '../../components/ui/states';
 import { fleetReportDownloadUrl, useFleetReport } from '../../features/reports/api/get-fleet-report';
-import { MonthPicker, useMonthParam } from '../../features/reports/components/period';
+import { latestDate, MonthPicker, useMonthParam } from '../../features/reports/components/period';
 import { ReportDownloads, ReportSheet } from '../../features/reports/components/report-sheet';
+import { useVessels } from '../../features/vessels/api/get-vessels';
 import { RequireCapability } from '../signed-in';
 
-function FleetReportPage() {
-  const [month, setMonth] = useMonthParam();
+function FleetReportPage({ latestLogDate }: { latestLogDate: string | null | undefined }) {
+  const [month, setMonth] = useMonthParam(latestLogDate);
   const report = useFleetReport(month);
   return (
     <div className="flex flex-col gap-4">
@@ -23,11 +24,18 @@ function FleetReportPage() {
   );
 }
 
+/** Opens on the month of the fleet's latest logged day. */
+function FleetReportOnLatestMonth() {
+  const vessels = useVessels();
+  if (vessels.isPending) return <LoadingState label="Finding the latest logged month…" />;
+  return <FleetReportPage latestLogDate={latestDate((vessels.data ?? []).map((v) => v.lastLogDate))} />;
+}
+
 /** The fleet's monthly report, for superintendents, energy officers and administrators. */
 export function Component() {
   return (
     <RequireCapability capability="reports:read" title="Monthly fleet report">
-      <FleetReportPage />
+      <FleetReportOnLatestMonth />
     </RequireCapability>
   );
 }

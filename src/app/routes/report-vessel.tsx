@@ -1,15 +1,14 @@
 import { useParams } from 'react-router-dom';
 import { Button } from '../../components/ui/button';
 import { PageHeader } from '../../components/ui/page-header';
-import { QueryView } from '../../components/ui/states';
+import { LoadingState, QueryView } from '../../components/ui/states';
 import { useVesselReport, vesselReportDownloadUrl } from '../../features/reports/api/get-vessel-report';
 import { MonthPicker, useMonthParam } from '../../features/reports/components/period';
 import { ReportDownloads, ReportSheet } from '../../features/reports/components/report-sheet';
+import { useVessel } from '../../features/vessels/api/get-vessel';
 
-/** A vessel's monthly report: printable on A4, with CSV and XLSX downloads of the same content. */
-export function Component() {
-  const { vesselId = '' } = useParams();
-  const [month, setMonth] = useMonthParam();
+function VesselReportPage({ vesselId, latestLogDate }: { vesselId: string; latestLogDate: string | null | undefined }) {
+  const [month, setMonth] = useMonthParam(latestLogDate);
   const report = useVesselReport(vesselId, month);
   return (
     <div className="flex flex-col gap-4">
@@ -23,4 +22,12 @@ export function Component() {
       </QueryView>
     </div>
   );
+}
+
+/** A vessel's monthly report: printable on A4, with CSV and XLSX downloads of the same content; opens on the month of the latest log. */
+export function Component() {
+  const { vesselId = '' } = useParams();
+  const vessel = useVessel(vesselId);
+  if (vessel.isPending) return <LoadingState label="Finding the latest logged month…" />;
+  return <VesselReportPage vesselId={vesselId} latestLogDate={vessel.data?.lastLogDate} />;
 }

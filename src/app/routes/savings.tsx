@@ -10,6 +10,7 @@ import { formatDate, formatHours, formatKg, formatPct, formatTonnes } from '../.
 import { paths } from '../../config/paths';
 import { PeriodPicker, usePeriodParam } from '../../features/reports/components/period';
 import { useVesselSavings } from '../../features/savings/api/get-vessel-savings';
+import { useVessel } from '../../features/vessels/api/get-vessel';
 import { dailySavingsOption, monthlyFuelOption } from '../../features/savings/components/savings-chart-options';
 
 const withInterval = (a: IntervalAmountView, format: (v: number) => string) => `${format(a.value)} (${format(a.lower)} to ${format(a.upper)})`;
@@ -104,9 +105,8 @@ function DayTable({ r }: { r: VesselSavingsReport }) {
   );
 }
 
-export function Component() {
-  const { vesselId = '' } = useParams();
-  const [period, setPeriod] = usePeriodParam();
+function SavingsPage({ vesselId, latestLogDate }: { vesselId: string; latestLogDate: string | null | undefined }) {
+  const [period, setPeriod] = usePeriodParam(latestLogDate);
   const query = useVesselSavings(vesselId, period);
   return (
     <div className="flex flex-col gap-4">
@@ -158,4 +158,12 @@ export function Component() {
       )}
     </div>
   );
+}
+
+/** A vessel's savings; opens on the month of its latest logged day. */
+export function Component() {
+  const { vesselId = '' } = useParams();
+  const vessel = useVessel(vesselId);
+  if (vessel.isPending) return <LoadingState label="Finding the latest logged month…" />;
+  return <SavingsPage vesselId={vesselId} latestLogDate={vessel.data?.lastLogDate} />;
 }

@@ -16,23 +16,39 @@ export function monthBounds(month: string): { from: string; to: string } {
 }
 
 /**
- * The period of a page, kept in the address (?from=&to=) so it can be shared and reloaded; the previous full month
- * when the address names none.
+ * The month a page opens on when its address names none: the month of the latest logged day when one is known (so
+ * a vessel whose logs stop before last month does not open on an empty page), else the previous calendar month.
  */
-export function usePeriodParam(): [{ from: string; to: string }, (next: { from: string; to: string }) => void] {
+export function defaultMonth(latestLogDate?: string | null, now: Date = new Date()): string {
+  return latestLogDate && DATE.test(latestLogDate) ? latestLogDate.slice(0, 7) : previousMonth(now);
+}
+
+/** The latest of some log dates (YYYY-MM-DD sort as text), or null when none is logged. */
+export function latestDate(dates: readonly (string | null | undefined)[]): string | null {
+  return dates.reduce<string | null>((latest, d) => (d && (!latest || d > latest) ? d : latest), null);
+}
+
+/**
+ * The period of a page, kept in the address (?from=&to=) so it can be shared and reloaded; the month of the latest
+ * logged day (or the previous full month) when the address names none.
+ */
+export function usePeriodParam(latestLogDate?: string | null): [{ from: string; to: string }, (next: { from: string; to: string }) => void] {
   const [params, setParams] = useSearchParams();
-  const fallback = monthBounds(previousMonth());
+  const fallback = monthBounds(defaultMonth(latestLogDate));
   const from = params.get('from') ?? '';
   const to = params.get('to') ?? '';
   const period = DATE.test(from) && DATE.test(to) ? { from, to } : fallback;
   return [period, (next) => setParams((p) => ({ ...Object.fromEntries(p), from: next.from, to: next.to }), { replace: true })];
 }
 
-/** The month of a report page, kept in the address (?month=YYYY-MM); the previous full month by default. */
-export function useMonthParam(): [string, (month: string) => void] {
+/**
+ * The month of a report page, kept in the address (?month=YYYY-MM); by default the month of the latest logged day,
+ * or the previous full month when no day is logged.
+ */
+export function useMonthParam(latestLogDate?: string | null): [string, (month: string) => void] {
   const [params, setParams] = useSearchParams();
   const month = params.get('month') ?? '';
-  return [MONTH.test(month) ? month : previousMonth(), (next) => setParams((p) => ({ ...Object.fromEntries(p), month: next }), { replace: true })];
+  return [MONTH.test(month) ? month : defaultMonth(latestLogDate), (next) => setParams((p) => ({ ...Object.fromEntries(p), month: next }), { replace: true })];
 }
 
 /** From / to date inputs of a period (hidden in print). */

@@ -1,4 +1,5 @@
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { afterAll, beforeAll } from 'vitest';
 
 /** Debian's chromium package; scripts/test.ts installs it when missing. */
 export const CHROMIUM_PATH = '/usr/bin/chromium';
@@ -34,4 +35,36 @@ export async function freshPage(browser: Browser): Promise<{ context: BrowserCon
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
   return { context, page, outsideRequests };
+}
+
+/**
+ * One browser for the test file: launched before its first test, closed after its last. Call at the top level of
+ * a test file; the returned function gives the running browser inside a test.
+ */
+export function sharedBrowser(): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error('sharedBrowser(): the browser is not running (call it at the top level of the test file)');
+    return browser;
+  };
+}
+
+/** Fills and submits the sign-in form; does not wait for the outcome (a wrong password stays on the form). */
+export async function submitSignIn(page: Page, email: string, password: string): Promise<void> {
+  await page.goto('/sign-in');
+  await page.locator('#sign-in-email').fill(email);
+  await page.locator('#sign-in-password').fill(password);
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+}
+
+/** Signs in and waits for the signed-in navigation (its fleet entry). */
+export async function signIn(page: Page, email: string, password: string): Promise<void> {
+  await submitSignIn(page, email, password);
+  await page.locator('[data-nav="fleet"]').waitFor();
 }

@@ -1,25 +1,17 @@
 import { readFile } from 'node:fs/promises';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { TEMPLATE_HEADERS } from '../../server/lib/csv-mapping';
 import { DEMO_VESSELS } from '../../seed/fleet';
 import { DEMO_SIGN_INS } from '../../seed/scenario';
 import { LOG_FLAG_CODES } from '../../shared/schemas/logs';
-import { freshPage, launchBrowser } from './browser';
+import { freshPage, sharedBrowser, signIn } from './browser';
 
 // The chief engineer of one vessel (seed/fleet.ts: Shearwater Bay), who may edit its log (logs:edit).
 const CHIEF = DEMO_SIGN_INS.find((s) => s.role === 'chief_engineer' && s.vessels.length === 1);
 if (!CHIEF) throw new Error('seed/scenario.ts DEMO_SIGN_INS has no chief engineer with one vessel');
 const VESSEL = DEMO_VESSELS.find((v) => v.name === CHIEF.vessels[0]);
 if (!VESSEL) throw new Error(`seed/fleet.ts has no vessel ${CHIEF.vessels[0]}`);
-
-async function signIn(page: Page, email: string, password: string): Promise<void> {
-  await page.goto('/sign-in');
-  await page.locator('#sign-in-email').fill(email);
-  await page.locator('#sign-in-password').fill(password);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.locator('[data-nav="fleet"]').waitFor();
-}
 
 type LogPage = { total: number; page: number; pageSize: number; rows: { logDate: string; designation: string }[]; missingDays: { designation: string; date: string }[] };
 
@@ -37,17 +29,11 @@ async function pagerText(page: Page): Promise<string> {
 const daysIn = (pager: string) => Number(/·\s*([\d,\s\u00a0]+)\s*set-days?/.exec(pager)?.[1].replace(/[^\d]/g, ''));
 const logTable = (page: Page) => page.locator('table', { has: page.locator('caption', { hasText: 'Daily genset log with derived figures' }) });
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = sharedBrowser();
 
 describe('log intake for a chief engineer', () => {
   it('pages and filters the own log, imports a CSV through the wizard with a row error shown, undoes it, and opens the fuel lots', async () => {
-    const { context, page, outsideRequests } = await freshPage(browser);
+    const { context, page, outsideRequests } = await freshPage(browser());
     page.on('dialog', (d) => void d.accept());
     try {
       await signIn(page, CHIEF.email, CHIEF.password);

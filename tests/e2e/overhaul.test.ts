@@ -1,9 +1,9 @@
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { DEMO_VESSELS } from '../../seed/fleet';
 import { DEMO_SIGN_INS } from '../../seed/scenario';
 import type { VesselOverhaul } from '../../shared/schemas/overhaul';
-import { freshPage, launchBrowser } from './browser';
+import { freshPage, sharedBrowser, signIn } from './browser';
 
 const PLANNER = DEMO_SIGN_INS.find((s) => s.role === 'planner');
 if (!PLANNER) throw new Error('seed/scenario.ts DEMO_SIGN_INS has no planner');
@@ -16,14 +16,6 @@ const SERVICE_SETS = VESSEL.gensets.filter((g) => g.duty === 'service').map((g) 
 
 /** "12 Mar 2027" as src/lib/format formatDate writes a date (en-GB, day month year). */
 const SHORT_DATE = /\d{1,2} [A-Z][a-z]{2,3} \d{4}/;
-
-async function signIn(page: Page, email: string, password: string): Promise<void> {
-  await page.goto('/sign-in');
-  await page.locator('#sign-in-email').fill(email);
-  await page.locator('#sign-in-password').fill(password);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.locator('[data-nav="fleet"]').waitFor();
-}
 
 /** From the navigation entry of the vessel to its overhaul page; the vessel id from the address. */
 async function openOverhaul(page: Page): Promise<string> {
@@ -52,17 +44,11 @@ function plusDays(date: string, days: number): string {
   return d.toISOString().slice(0, 10);
 }
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = sharedBrowser();
 
 describe('overhaul planner', () => {
   it('shows a planner every service set with hours left and a due date, the timeline, and a stagger proposal in hours', async () => {
-    const { context, page, outsideRequests } = await freshPage(browser);
+    const { context, page, outsideRequests } = await freshPage(browser());
     try {
       await signIn(page, PLANNER.email, PLANNER.password);
       const vesselId = await openOverhaul(page);
@@ -105,7 +91,7 @@ describe('overhaul planner', () => {
   });
 
   it('lets the chief engineer record completed work, without the planning controls', async () => {
-    const { context, page } = await freshPage(browser);
+    const { context, page } = await freshPage(browser());
     try {
       await signIn(page, CHIEF.email, CHIEF.password);
       const vesselId = await openOverhaul(page);

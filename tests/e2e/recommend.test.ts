@@ -1,9 +1,9 @@
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { DEMO_VESSELS } from '../../seed/fleet';
 import { DEMO_SIGN_INS } from '../../seed/scenario';
 import { RECOMMENDATION_CAUTION } from '../../shared/schemas/recommendations';
-import { freshPage, launchBrowser } from './browser';
+import { freshPage, sharedBrowser, signIn } from './browser';
 
 // A chief engineer of one vessel (seed/fleet.ts: the first chief engineer, Shearwater Bay, four 2 400 kW sets).
 const CHIEF = DEMO_SIGN_INS.find((s) => s.role === 'chief_engineer' && s.vessels.length === 1);
@@ -13,14 +13,6 @@ if (!VESSEL) throw new Error(`seed/fleet.ts has no vessel ${CHIEF.vessels[0]}`);
 /** The vessel's typical sea-passage load in the demo scenario (seed/fleet.ts modeLoadKw.sea). */
 const SEA_LOAD_KW = VESSEL.modeLoadKw.sea;
 
-async function signIn(page: Page, email: string, password: string): Promise<void> {
-  await page.goto('/sign-in');
-  await page.locator('#sign-in-email').fill(email);
-  await page.locator('#sign-in-password').fill(password);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.locator('[data-nav="fleet"]').waitFor();
-}
-
 /** The vessel id in a nav key such as "recommend-<id>". */
 async function vesselIdFromNav(page: Page, prefix: string): Promise<string> {
   const keys = await page.locator(`nav[aria-label="Main"] [data-nav^="${prefix}-"]`).evaluateAll((links) => links.map((a) => a.getAttribute('data-nav') ?? ''));
@@ -28,17 +20,11 @@ async function vesselIdFromNav(page: Page, prefix: string): Promise<string> {
   return keys[0].slice(prefix.length + 1);
 }
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = sharedBrowser();
 
 describe('recommendations for a chief engineer', () => {
   it('ranks the combinations for a typed load with the caution, and the guideline shows its bands', async () => {
-    const { context, page, outsideRequests } = await freshPage(browser);
+    const { context, page, outsideRequests } = await freshPage(browser());
     try {
       await signIn(page, CHIEF.email, CHIEF.password);
       const vesselId = await vesselIdFromNav(page, 'recommend');
@@ -96,7 +82,7 @@ describe('recommendations for a chief engineer', () => {
   });
 
   it('opens the operating rules of the own vessel from the vessel page, with the N-1 reason and the caution', async () => {
-    const { context, page } = await freshPage(browser);
+    const { context, page } = await freshPage(browser());
     try {
       await signIn(page, CHIEF.email, CHIEF.password);
       await page.locator('nav[aria-label="Main"] [data-nav^="vessel-"]').first().click();

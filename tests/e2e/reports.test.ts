@@ -1,12 +1,12 @@
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { DEMO_VESSELS } from '../../seed/fleet';
 import { DEMO_SIGN_INS } from '../../seed/scenario';
 import { SCENARIO_LAST_DATE } from '../../seed/dates';
 import type { FleetBenchmark } from '../../shared/schemas/fleet';
 import type { MonthlyReport } from '../../shared/schemas/reports';
 import { SAVINGS_CAUTION } from '../../shared/schemas/savings';
-import { freshPage, launchBrowser } from './browser';
+import { freshPage, sharedBrowser, signIn } from './browser';
 
 const ENERGY = DEMO_SIGN_INS.find((s) => s.role === 'energy_officer');
 if (!ENERGY) throw new Error('seed/scenario.ts DEMO_SIGN_INS has no energy officer');
@@ -15,14 +15,6 @@ if (!ENERGY) throw new Error('seed/scenario.ts DEMO_SIGN_INS has no energy offic
 const MONTH = SCENARIO_LAST_DATE.slice(0, 7);
 const FROM = `${MONTH}-01`;
 const TO = SCENARIO_LAST_DATE;
-
-async function signIn(page: Page, email: string, password: string): Promise<void> {
-  await page.goto('/sign-in');
-  await page.locator('#sign-in-email').fill(email);
-  await page.locator('#sign-in-password').fill(password);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.locator('[data-nav="fleet"]').waitFor();
-}
 
 async function getJson<T>(page: Page, url: string): Promise<T> {
   return page.evaluate(async (u) => {
@@ -34,17 +26,11 @@ async function getJson<T>(page: Page, url: string): Promise<T> {
 
 const rowIds = (page: Page) => page.locator('[data-table="vessels"] tbody tr[data-row]').evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-row') ?? ''));
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = sharedBrowser();
 
 describe('reports for an energy officer', () => {
   it('compares the fleet per vessel with units and method tooltips, and a vessel report carries the caution', async () => {
-    const { context, page, outsideRequests } = await freshPage(browser);
+    const { context, page, outsideRequests } = await freshPage(browser());
     try {
       await signIn(page, ENERGY.email, ENERGY.password);
       await page.locator('[data-nav="fleet-benchmark"]').click();
@@ -125,7 +111,7 @@ describe('reports for an energy officer', () => {
   });
 
   it('subscribes to a vessel report and unsubscribes; reads the fuel prices without editing them', async () => {
-    const { context, page, outsideRequests } = await freshPage(browser);
+    const { context, page, outsideRequests } = await freshPage(browser());
     try {
       await signIn(page, ENERGY.email, ENERGY.password);
       await page.locator('[data-nav="subscriptions"]').click();

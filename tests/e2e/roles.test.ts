@@ -1,8 +1,8 @@
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { DEMO_VESSELS } from '../../seed/fleet';
 import { DEMO_SIGN_INS } from '../../seed/scenario';
-import { freshPage, launchBrowser } from './browser';
+import { freshPage, sharedBrowser, signIn, submitSignIn } from './browser';
 
 // What each role must see in the navigation. Written out by hand from the capability table in shared/roles.ts
 // (users:manage, outbox:read, company:settings, audit:read; reports:read for the fleet benchmark and fleet report;
@@ -25,13 +25,6 @@ const ONE_PER_ROLE = Object.keys(EXPECTED_COMPANY_LINKS).map((role) => {
   return entry;
 });
 
-async function signIn(page: Page, email: string, password: string): Promise<void> {
-  await page.goto('/sign-in');
-  await page.locator('#sign-in-email').fill(email);
-  await page.locator('#sign-in-password').fill(password);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-}
-
 async function navKeys(page: Page): Promise<string[]> {
   return page.locator('nav[aria-label="Main"] [data-nav]').evaluateAll((links) => links.map((a) => a.getAttribute('data-nav') ?? ''));
 }
@@ -41,17 +34,11 @@ async function vesselLinkNames(page: Page): Promise<string[]> {
   return names.map((n) => n.trim()).sort();
 }
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = sharedBrowser();
 
 describe('signed-in navigation follows the role', () => {
   it.each(ONE_PER_ROLE.map((s) => [s.role, s] as const))('%s sees its own pages and vessels, and signs out', async (_role, demo) => {
-    const { context, page, outsideRequests } = await freshPage(browser);
+    const { context, page, outsideRequests } = await freshPage(browser());
     try {
       await signIn(page, demo.email, demo.password);
       await page.locator('[data-nav="fleet"]').waitFor();
@@ -93,10 +80,10 @@ describe('signed-in navigation follows the role', () => {
 
 describe('sign-in', () => {
   it('shows an error and stays on the sign-in page for a wrong password', async () => {
-    const { context, page } = await freshPage(browser);
+    const { context, page } = await freshPage(browser());
     try {
       const admin = ONE_PER_ROLE[0];
-      await signIn(page, admin.email, `${admin.password}-wrong`);
+      await submitSignIn(page, admin.email, `${admin.password}-wrong`);
       const alert = page.locator('[data-alert="error"]');
       await alert.waitFor();
       expect(await alert.textContent()).toContain('wrong');

@@ -1,3 +1,4 @@
+import { useEffect } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { Field, Input } from '../../../components/ui/form-field';
 
@@ -37,7 +38,12 @@ export function usePeriodParam(latestLogDate?: string | null): [{ from: string; 
   const fallback = monthBounds(defaultMonth(latestLogDate));
   const from = params.get('from') ?? '';
   const to = params.get('to') ?? '';
-  const period = DATE.test(from) && DATE.test(to) ? { from, to } : fallback;
+  const named = DATE.test(from) && DATE.test(to);
+  const period = named ? { from, to } : fallback;
+  // Write the default into the address, so the page can be shared or reloaded on the same period.
+  useEffect(() => {
+    if (!named) setParams((p) => ({ ...Object.fromEntries(p), from: fallback.from, to: fallback.to }), { replace: true });
+  }, [named, fallback.from, fallback.to, setParams]);
   return [period, (next) => setParams((p) => ({ ...Object.fromEntries(p), from: next.from, to: next.to }), { replace: true })];
 }
 
@@ -48,7 +54,12 @@ export function usePeriodParam(latestLogDate?: string | null): [{ from: string; 
 export function useMonthParam(latestLogDate?: string | null): [string, (month: string) => void] {
   const [params, setParams] = useSearchParams();
   const month = params.get('month') ?? '';
-  return [MONTH.test(month) ? month : defaultMonth(latestLogDate), (next) => setParams((p) => ({ ...Object.fromEntries(p), month: next }), { replace: true })];
+  const named = MONTH.test(month);
+  const fallback = defaultMonth(latestLogDate);
+  useEffect(() => {
+    if (!named) setParams((p) => ({ ...Object.fromEntries(p), month: fallback }), { replace: true });
+  }, [named, fallback, setParams]);
+  return [named ? month : fallback, (next) => setParams((p) => ({ ...Object.fromEntries(p), month: next }), { replace: true })];
 }
 
 /** From / to date inputs of a period (hidden in print). */

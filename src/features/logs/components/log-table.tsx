@@ -1,6 +1,6 @@
 import { createColumnHelper, tableFeatures, useTable } from '@tanstack/react-table';
 import { useState } from 'react';
-import { LOG_FLAG_CODES, type LogListQuery, type LogRow } from '../../../../shared/schemas/logs';
+import { LOG_FLAG_CODES, type LogFlagCode, type LogListQuery, type LogRow } from '../../../../shared/schemas/logs';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { Field, Input, Select } from '../../../components/ui/form-field';
@@ -40,6 +40,23 @@ interface LogTableProps {
 }
 
 /** The vessel's log with server-side paging, sorting and filters; derived figures carry their units. */
+/** Plain words for the flag filter; the code stays beside it, as on the rows' badges. */
+const FLAG_FILTER_LABELS: Record<Exclude<LogFlagCode, 'MISSING_DAY'>, string> = {
+  HOURS_OVER_24: 'Hours run longer than the day',
+  HOURS_NEGATIVE: 'Negative hours run',
+  METER_NEGATIVE_DELTA: 'Meter reading went backwards',
+  METER_PREVIOUS_MISSING: "No previous day's meter reading",
+  METER_REPLACEMENT_INCONSISTENT: 'Meter replacement does not add up',
+  KWH_OVER_RATED: 'Energy above the rating × hours',
+  SFOC_OUT_OF_BAND: 'SFOC outside the plausible band',
+  LOW_LOAD: 'Average load below the minimum load',
+  FUEL_WITHOUT_HOURS: 'Fuel logged with no hours run',
+  DUPLICATE_DATE: 'Same day logged twice',
+  FUEL_LOT_ASSUMED: 'No fuel lot logged, one assumed',
+  FUEL_LOT_MISSING: 'No fuel lot registered for the day',
+  FUEL_NOT_LOGGED: 'Set ran, no fuel logged',
+};
+
 type Query = { page: number; pageSize: number; sort: NonNullable<LogListQuery['sort']>; dir: 'asc' | 'desc'; gensetId?: string; from?: string; to?: string; flag?: LogListQuery['flag'] };
 
 export function LogTable({ vesselId, sets, mayEdit, onEdit, onExclude, onDelete, onRecordReplacement }: LogTableProps) {
@@ -65,7 +82,7 @@ export function LogTable({ vesselId, sets, mayEdit, onEdit, onExclude, onDelete,
         <div className="flex flex-wrap gap-1">
           {c.row.original.excludedFromFit ? <Badge tone="neutral">excluded: {c.row.original.excludeReason}</Badge> : null}
           {c.row.original.flags.map((f) => (
-            <span key={f.code} title={f.message}>
+            <span key={`${f.code}-${f.field}`} title={f.message}>
               <Badge tone={f.severity === 'error' ? 'bad' : 'accent'}>{f.code}</Badge>
             </span>
           ))}
@@ -116,7 +133,7 @@ export function LogTable({ vesselId, sets, mayEdit, onEdit, onExclude, onDelete,
           <Select id="f-flag" value={q.flag ?? ''} onChange={(e) => set({ flag: (e.target.value || undefined) as LogListQuery['flag'] })}>
             <option value="">Any</option>
             {LOG_FLAG_CODES.filter((c) => c !== 'MISSING_DAY').map((c) => (
-              <option key={c} value={c}>{c}</option>
+              <option key={c} value={c}>{FLAG_FILTER_LABELS[c]} ({c})</option>
             ))}
           </Select>
         </Field>

@@ -387,19 +387,25 @@ function solveModel(model: StaggerModel, solve: Solve): Solved | null {
 }
 
 /**
- * Dues nearest the windows: least Σ days from windows, then least fuel with that sum. The first stage is solved on
- * slots at most Δ from a window, Δ doubling from the gap until the optimum V satisfies V ≤ Δ (then no slot farther
- * than Δ can do better, so V is the optimum over all slots) or Δ covers the horizon. The second stage needs only
- * slots at most V from a window, since any slot farther would exceed the sum V alone.
+ * Dues nearest the windows: least Σ days from windows, then the least fuel for that placement. The first stage is
+ * solved on slots at most Δ from a window, Δ doubling from the gap until the optimum V satisfies V ≤ Δ (then no
+ * slot farther than Δ can do better, so V is the optimum over all slots) or Δ covers the horizon. The second stage
+ * fixes the chosen slots and solves the rates for least fuel (an LP). (A full second MILP over all placements of
+ * sum V made javascript-lp-solver stall on some instances, so the fuel is best for the placement, not over ties.)
  */
 function solveNearest(p: StaggerProblem, solve: Solve): Solved | null {
   for (let delta = Math.max(7, p.gapDays); ; delta *= 2) {
     const full = delta >= p.horizonDays;
-    const first = solve(buildStaggerModel(p, { candidateDistanceDays: full ? Infinity : delta, objective: 'window-distance' }));
+    const model = buildStaggerModel(p, { candidateDistanceDays: full ? Infinity : delta, objective: 'window-distance' });
+    const first = solve(model);
     if (first.timedOut) timedOutSolves.count++;
     if (first.feasible && (full || first.objective <= delta + 1e-6)) {
-      const distanceDays = Math.round(first.objective);
-      return solveModel(buildStaggerModel(p, { candidateDistanceDays: distanceDays, objective: 'fuel', maxDistanceDays: distanceDays }), solve);
+      const fuel = buildStaggerModel(p, { candidateDistanceDays: full ? Infinity : delta, objective: 'fuel' });
+      const fixed: StaggerModel = {
+        ...fuel,
+        columns: fuel.columns.map((c) => (c.binary ? { ...c, binary: false, lower: Math.round(first.values[c.name] ?? 0), upper: Math.round(first.values[c.name] ?? 0) } : c)),
+      };
+      return solveModel(fixed, solve);
     }
     if (full) return null;
   }
@@ -472,9 +478,11 @@ function infeasible(p: StaggerProblem, reasons: string[]): StaggerProposal {
  * a work window, at the least fuel; when no arrangement puts every due in a window, the dues as near the windows as
  * possible (least total days outside, then least fuel), with the reasons.
  *
- * Method: the exact MILP of `buildStaggerModel`, solved with javascript-lp-solver; first with window days only,
- * then (if that is infeasible) with every day the rates allow, lexicographically. Each set runs its budget evenly
- * (budget = rate × days); a due falls on day k = ⌈H / rate⌉ after fromDate. Fuel = Σ fuelKgPerH × budget, against
+ * Method: the exact MILP of `buildStaggerModel`, solved with javascript-lp-solver; first with window days only
+ * (least fuel); if that is infeasible, the reasons are named (per set and window; then a solve without the gap
+ * tells whether the gap or the load sharing is to blame) and the dues are placed nearest the windows (see
+ * solveNearest). Each set runs its budget evenly (budget = rate × days); a due falls on day k = ⌈H / rate⌉ after
+ * fromDate. Fuel = Σ fuelKgPerH × budget, against
  * the present usage scaled to the required set-hours. Assumptions: fuel per running hour is the set's figure at its
  * usual load; the downtime of the work itself is not modelled; windows outside the horizon are ignored.
  *
@@ -512,6 +520,12 @@ export function proposeHourBudgets(
   const inWindows = solveModel(buildStaggerModel(p, { candidateDistanceDays: 0, objective: 'fuel' }), solve);
   if (inWindows) return readProposal(p, 'in-windows', [], inWindows);
 
+  if (p.windows.length === 0) {
+    const reason = timedOutSolves.count > 0
+      ? `no arrangement found within the time limit of ${timeLimitMs} ms per solve`
+      : `no budgets keep the due dates ${p.gapDays} days apart while the sets share ${p.requiredH} set-hours per day`;
+    return infeasible(p, [reason]);
+  }
   const { reasons, setsWithoutWindow } = windowReasons(p);
   for (const id of setsWithoutWindow) reasons.push(`${id} can make no window before ${dateOfDayNumber(p.fromDay + p.horizonDays)}`);
   if (setsWithoutWindow.length === 0) {

@@ -9,3 +9,4 @@ export * from './savings/index';
 export * from './dispatch/index';
 export * from './plan/index';
 export { loadHighs } from './highs';
+export * from './overhaul/index';

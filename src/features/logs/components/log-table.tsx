@@ -64,7 +64,7 @@ export function LogTable({ vesselId, sets, mayEdit, onEdit, onExclude, onDelete,
   const logs = useLogs(vesselId, q);
   const set = (patch: Partial<Query>) => setQ((old) => ({ ...old, page: 1, ...patch }));
   const columns = col.columns([
-    col.accessor('logDate', { header: 'Date', cell: (c) => formatDate(c.getValue()) }),
+    col.accessor('logDate', { header: 'Date', cell: (c) => <span className="whitespace-nowrap">{formatDate(c.getValue())}</span> }),
     col.accessor('designation', { header: 'Set' }),
     col.accessor((r) => r.derived.hoursRun, { id: 'hoursRun', header: 'Hours run', cell: (c) => formatHours(c.getValue()) }),
     col.accessor((r) => r.derived.kwh, { id: 'kwh', header: 'Energy', cell: (c) => kwh(c.getValue()) }),

@@ -12,6 +12,7 @@ import { usePlans } from '../../features/plans/api/get-plans';
 import { useResolvePlan } from '../../features/plans/api/resolve-plan';
 import { PlanForm } from '../../features/plans/components/plan-form';
 import { PlanView } from '../../features/plans/components/plan-view';
+import { useVessel } from '../../features/vessels/api/get-vessel';
 import { useOperatingRules } from '../../features/recommendations/api/get-operating-rules';
 import { usePlantModel } from '../../features/recommendations/api/get-plant-model';
 import { Caution } from '../../features/recommendations/components/caution';
@@ -38,15 +39,20 @@ function OnePlan({ vesselId, planId, onOpen }: { vesselId: string; planId: strin
   );
 }
 
-/** The plan form with what it needs from the plant: bus section names and the modes whose bus tie is open. */
+/** The plan form with what it needs from the plant (bus section names, the modes whose bus tie is open) and the vessel's latest log. */
 function NewPlan({ vesselId, onCreated }: { vesselId: string; onCreated: (id: string) => void }) {
   const plant = usePlantModel(vesselId);
   const rules = useOperatingRules(vesselId);
+  const vessel = useVessel(vesselId);
   return (
     <QueryView query={plant} loadingLabel="Loading the plant…">
       {(p) => (
         <QueryView query={rules} loadingLabel="Loading the operating rules…">
-          {(r) => <PlanForm vesselId={vesselId} busSections={p.busSections} openTieModes={r.rules.filter((x) => !x.busTieClosed).map((x) => x.mode)} onCreated={onCreated} />}
+          {(r) => (
+            <QueryView query={vessel} loadingLabel="Loading the vessel…">
+              {(v) => <PlanForm vesselId={vesselId} busSections={p.busSections} openTieModes={r.rules.filter((x) => !x.busTieClosed).map((x) => x.mode)} onCreated={onCreated} lastLogDate={v.lastLogDate} />}
+            </QueryView>
+          )}
         </QueryView>
       )}
     </QueryView>
@@ -75,7 +81,7 @@ export function Component() {
       </Panel>
       {open ? <OnePlan vesselId={vesselId} planId={open} onOpen={setOpen} /> : null}
       <Panel title="Saved plans">
-        <QueryView query={plans} isEmpty={(l) => l.length === 0} empty={<EmptyState title="No plans yet" next="Enter a load profile above." />}>
+        <QueryView query={plans} isEmpty={(l) => l.length === 0} empty={<EmptyState title="No plans yet" next="Enter or build a load profile above and press Plan; solved plans are kept here." />}>
           {(list) => (
             <Table caption="Saved plans">
               <thead>

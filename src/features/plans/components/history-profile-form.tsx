@@ -15,10 +15,11 @@ const FIELD_NAMES = ['from', 'to', 'sequence', 'periodH'] as const;
 
 const isoDay = (d: Date) => d.toISOString().slice(0, 10);
 
-function defaults(today: Date): HistoryProfileInput {
+/** The 90 days up to `lastDay` (the vessel's latest logged day, so the window holds logs). */
+function defaults(lastDay: Date): HistoryProfileInput {
   return {
-    from: isoDay(new Date(today.getTime() - 90 * 86_400_000)),
-    to: isoDay(today),
+    from: isoDay(new Date(lastDay.getTime() - 90 * 86_400_000)),
+    to: isoDay(lastDay),
     periodH: 6,
     sequence: [
       { mode: 'port', hours: 12 },
@@ -34,11 +35,11 @@ function defaults(today: Date): HistoryProfileInput {
  * A load profile from the vessel's logged history: the average load of each mode over a window of days, laid
  * along a sequence of legs (mode and hours). The result goes to `onProfile`, where the user edits it before solving.
  */
-export function HistoryProfileForm({ vesselId, onProfile }: { vesselId: string; onProfile: (profile: HistoryProfile) => void }) {
+export function HistoryProfileForm({ vesselId, lastLogDate, onProfile }: { vesselId: string; lastLogDate?: string | null; onProfile: (profile: HistoryProfile) => void }) {
   const build = useHistoryProfile();
   const form = useForm<HistoryProfileInput, unknown, z.output<typeof historyProfileInputSchema>>({
     resolver: zodResolver(historyProfileInputSchema, numberFieldMessages),
-    defaultValues: defaults(new Date()),
+    defaultValues: defaults(lastLogDate ? new Date(`${lastLogDate}T00:00:00Z`) : new Date()),
   });
   const legs = useFieldArray({ control: form.control, name: 'sequence' });
   const server = useServerErrors(form.setError, FIELD_NAMES);

@@ -64,13 +64,15 @@ interface PlanFormProps {
   /** Modes whose operating rule has the bus tie open: their periods take a load per section. */
   openTieModes: readonly OperatingModeName[];
   onCreated: (planId: string) => void;
+  /** The vessel's latest logged day: the history window ends there. */
+  lastLogDate?: string | null;
 }
 
 /**
  * New voyage plan: a load profile typed, pasted, read from CSV or built from the logged history, edited period
  * by period (with per-section loads where the bus tie is open), then solved by the server in the background.
  */
-export function PlanForm({ vesselId, busSections, openTieModes, onCreated }: PlanFormProps) {
+export function PlanForm({ vesselId, busSections, openTieModes, onCreated, lastLogDate }: PlanFormProps) {
   const create = useCreatePlan();
   const baseResolver = zodResolver(planInputSchema, numberFieldMessages);
   const resolver: Resolver<PlanInput, unknown, PlanOutput> = (values, context, options) =>
@@ -140,7 +142,7 @@ export function PlanForm({ vesselId, busSections, openTieModes, onCreated }: Pla
         </div>
         <div className="space-y-2">
           <h3 className="text-body font-semibold">Build from the logged history</h3>
-          <HistoryProfileForm vesselId={vesselId} onProfile={fromHistory} />
+          <HistoryProfileForm vesselId={vesselId} lastLogDate={lastLogDate} onProfile={fromHistory} />
           {historyNote ? <Alert tone="info">{historyNote}</Alert> : null}
         </div>
       </section>

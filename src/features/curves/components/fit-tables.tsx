@@ -45,9 +45,9 @@ function DataTable<T extends object>({ caption, data, columns, numeric }: { capt
 export function CoefficientTable({ set, fit }: { set: CurveSetFit; fit: CurveFitStats }) {
   const held = (k: 'a' | 'c') => (fit.activeConstraints.includes(k) ? ' (held at 0 by its bound)' : '');
   const rows: [string, string][] = [
-    ['a (no-load fuel rate)', `${sci(fit.coefficients.a, 'kg/h')} ± ${sci(fit.standardErrors.a, 'kg/h')}${held('a')}`],
-    ['b', `${sci(fit.coefficients.b, 'kg/kWh')} ± ${sci(fit.standardErrors.b, 'kg/kWh')}`],
-    ['c', `${sci(fit.coefficients.c, 'kg/(h·kW²)')} ± ${sci(fit.standardErrors.c, 'kg/(h·kW²)')}${held('c')}`],
+    ['a (no-load fuel rate; fuel rate = a + b·P + c·P², P in kW)', `${sci(fit.coefficients.a, 'kg/h')} ± ${sci(fit.standardErrors.a, 'kg/h')}${held('a')}`],
+    ['b (fuel per kWh, linear term)', `${sci(fit.coefficients.b, 'kg/kWh')} ± ${sci(fit.standardErrors.b, 'kg/kWh')}`],
+    ['c (curvature, quadratic term)', `${sci(fit.coefficients.c, 'kg/(h·kW²)')} ± ${sci(fit.standardErrors.c, 'kg/(h·kW²)')}${held('c')}`],
     ['R²', plain(fit.rSquared, 4)],
     ['Residual SD (day of average hours)', fit.residualSdKgPerH === null ? '–' : `${fit.residualSdKgPerH.toFixed(2)}\u00a0kg/h`],
     ['Days fitted', `${fit.days} of ${set.daysLogged} logged`],

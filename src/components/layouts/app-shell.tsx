@@ -27,7 +27,7 @@ interface AppShellProps {
 }
 
 export const ADVISORY_NOTICE =
-  "Kilowatch advises; the vessel's power management system, the maker's limits, class rules and the chief engineer decide.";
+  "Kilowatch advises; the vessel's power management system, the maker's limits, class rules, local regulations and the chief engineer decide.";
 
 /** The signed-in frame: console bar with the member's navigation, the page, and the advisory footer. */
 export function AppShell({ nav, userName, userDetail, onSignOut, signingOut, children }: AppShellProps) {

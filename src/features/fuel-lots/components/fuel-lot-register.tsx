@@ -73,7 +73,7 @@ export function FuelLotRegister({ vesselId, mayEdit }: { vesselId: string; mayEd
                   <Td numeric>{l.density15KgPerM3.toFixed(1)}&nbsp;kg/m³</Td>
                   <Td numeric>{l.lcvMjPerKg.toFixed(3)}&nbsp;MJ/kg {l.lcvEstimated ? <Badge tone="accent">estimated</Badge> : null}</Td>
                   <Td numeric>{l.sulphurPct === null ? '–' : `${l.sulphurPct.toFixed(2)}\u00a0%`}</Td>
-                  <Td numeric>{l.quantityT === null ? '–' : `${l.quantityT.toFixed(1)}\u00a0t`}</Td>
+                  <Td numeric>{l.quantityT === null ? '–' : `${l.quantityT.toLocaleString('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 })}\u00a0t`}</Td>
                   <Td>
                     {l.attachment ? <a className="underline" href={attachmentUrl(vesselId, l.id)}>{l.attachment.name} ({Math.ceil(l.attachment.bytes / 1024)} kB)</a> : '–'}
                     {mayEdit ? (

@@ -23,7 +23,7 @@ export {
   windowDistance,
 } from './stagger';
 export type { DueSlot, SetBudget, StaggerInput, StaggerModel, StaggerObjective, StaggerProblem, StaggerProposal, StaggerSet, WorkWindow } from './stagger';
-export { linearModelToLp, solveLinearModel } from './linear-model';
-export type { LinearColumn, LinearModel, LinearRow, LinearSolution } from './linear-model';
+export { highsSolver, linearModelToLp, solveLinearModel } from './linear-model';
+export type { HighsLike, LinearColumn, LinearModel, LinearRow, LinearSolution } from './linear-model';
 export { dueAlerts, dueKey } from './alerts';
 export type { DueAlert } from './alerts';

@@ -1,7 +1,9 @@
 /**
  * A small mixed-integer linear model held as plain data, written out for two solvers: javascript-lp-solver's JSON
- * model (the solver Kilowatch runs) and CPLEX LP text (read by HiGHS, used as an independent check).
+ * model (the default solve, exact on small models) and CPLEX LP text for HiGHS (the server's solve, whose time limit
+ * holds inside the solver; also the independent check in tests).
  */
+import type { Highs } from 'highs';
 import solver, { type SolveResult } from 'javascript-lp-solver';
 
 export interface LinearColumn {
@@ -93,4 +95,40 @@ export function solveLinearModel(model: LinearModel, options: { timeLimitMs?: nu
   }
   const objective = model.columns.reduce((s, c) => s + c.cost * values[c.name], 0);
   return { feasible: true, objective, values, timedOut };
+}
+
+/** What highsSolver needs of a HiGHS instance (npm `highs`, loaded by optimizer/highs.ts). */
+export interface HighsLike {
+  solve(lp: string, options?: Record<string, unknown>): { Status: string; ObjectiveValue?: number; Columns?: Record<string, { Primal?: number }> };
+}
+
+/**
+ * A solve function for proposeHourBudgets backed by HiGHS, whose time limit is enforced inside the solver (the
+ * javascript-lp-solver search checks its limit only between steps and can run far past it on long horizons).
+ * A search cut short by the limit returns its best plan with `timedOut: true`, or infeasible with `timedOut: true`.
+ *
+ * Cost: one MILP solve, at most about `timeLimitMs`. Never throws for an infeasible model.
+ *
+ * @example proposeHourBudgets(input, { solve: highsSolver(await loadHighs(), 5000) })
+ */
+export function highsSolver(highs: HighsLike | Highs, timeLimitMs = 10_000): (model: LinearModel) => LinearSolution {
+  return (model) => {
+    // HiGHS's own result type is a union over statuses; the narrow view reads what every status has.
+    const result = (highs as HighsLike).solve(linearModelToLp(model), {
+      output_flag: false,
+      time_limit: timeLimitMs / 1000,
+      mip_rel_gap: 1e-9,
+      primal_feasibility_tolerance: 1e-9,
+      mip_feasibility_tolerance: 1e-9,
+    });
+    const timedOut = result.Status === 'Time limit reached';
+    const columns = result.Columns ?? {};
+    const hasSolution = Number.isFinite(result.ObjectiveValue) && Object.keys(columns).length > 0;
+    if (result.Status === 'Optimal' || (timedOut && hasSolution)) {
+      const values: Record<string, number> = {};
+      for (const c of model.columns) values[c.name] = columns[c.name]?.Primal ?? 0;
+      return { feasible: true, objective: result.ObjectiveValue as number, values, ...(timedOut ? { timedOut } : {}) };
+    }
+    return timedOut ? { feasible: false, timedOut } : { feasible: false };
+  };
 }

@@ -6,7 +6,9 @@
  */
 import { and, desc, eq, inArray, lte } from 'drizzle-orm';
 import { dayNumber } from '../../optimizer/index';
+import { highsSolver } from '../../optimizer/overhaul/linear-model';
 import { proposeHourBudgets, type StaggerSet } from '../../optimizer/overhaul/stagger';
+import { loadHighs } from '../../optimizer/highs';
 import {
   OVERHAUL_CAUTION,
   WORK_WINDOW_LABELS,
@@ -23,6 +25,10 @@ import { parseBody } from '../lib/parse';
 import { vesselForActor } from './access';
 import { recordAudit } from './audit';
 import { loadCurveInputs } from './curve-inputs';
+
+/** Per MILP solve of a stagger proposal (a proposal makes one to three solves). */
+const STAGGER_SOLVE_LIMIT_MS = 4000;
+let highsInstance: ReturnType<typeof loadHighs> | null = null;
 import { loadSetHours, recentUsage, windowsOfVessel } from './overhaul-data';
 
 /** Days of a set's latest logs its fuel rate per running hour is taken over. */
@@ -132,6 +138,8 @@ async function computeStagger(deps: AppDeps, actor: Actor, vesselId: string, inp
   });
   const requiredSetHoursPerDay = input.requiredSetHoursPerDay ?? chosen.reduce((s, c) => s + c.usageHPerDay, 0);
   const labels = new Map(windowRows.map((w) => [w.id, `${WORK_WINDOW_LABELS[w.kind]} ${w.place} (${w.startsOn} to ${w.endsOn})`]));
+  // HiGHS enforces its time limit inside the solver, so an awkward horizon cannot hold the server for minutes.
+  const highs = await (highsInstance ??= loadHighs());
   const proposal = proposeHourBudgets({
     fromDate,
     untilDate: input.untilDate,
@@ -139,7 +147,7 @@ async function computeStagger(deps: AppDeps, actor: Actor, vesselId: string, inp
     windows: windowRows.map((w) => ({ id: w.id, startsOn: w.startsOn, endsOn: w.endsOn, label: `${WORK_WINDOW_LABELS[w.kind]} ${w.place}` })),
     minGapDays: input.minGapDays,
     requiredSetHoursPerDay,
-  });
+  }, { solve: highsSolver(highs, STAGGER_SOLVE_LIMIT_MS) });
   const byId = new Map(chosen.map((c) => [c.id, c]));
   const nameOf = (text: string) => chosen.reduce((t, c) => t.split(c.id).join(c.designation), text);
   const grade = vessel.fuelGrades[0] ?? null;

@@ -78,3 +78,21 @@ describe('stagger MILP: javascript-lp-solver equals HiGHS on the same model (see
     expect(compared).toBeGreaterThan(0);
   });
 });
+
+describe('stagger proposal with the HiGHS-backed solve (hard time limit)', () => {
+  it('gives the same proposal as javascript-lp-solver on the hand-computed four-set fixture', async () => {
+    const { FOUR_SETS } = await import('../fixtures/overhaul/stagger-four-sets');
+    const { proposeHourBudgets, highsSolver } = await import('../../optimizer/overhaul');
+    const viaLpSolver = proposeHourBudgets(FOUR_SETS);
+    const viaHighs = proposeHourBudgets(FOUR_SETS, { solve: highsSolver(highs, 5000) });
+    expect(viaHighs.status).toBe(viaLpSolver.status);
+    expect(viaHighs.proven).toBe(true);
+    expect(viaLpSolver.budgets.length).toBe(FOUR_SETS.sets.length);
+    for (const set of viaLpSolver.budgets) {
+      const other = viaHighs.budgets.find((s) => s.gensetId === set.gensetId)!;
+      expect(other.dueDate).toBe(set.dueDate);
+      expect(Math.abs(other.budgetH - set.budgetH)).toBeLessThan(1e-6);
+    }
+    expect(Math.abs(viaHighs.fuelDeltaKg - viaLpSolver.fuelDeltaKg)).toBeLessThan(1e-3);
+  });
+});

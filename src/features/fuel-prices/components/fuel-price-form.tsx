@@ -11,6 +11,9 @@ import { usePutFuelPrice } from '../api/put-fuel-price';
 const FIELD_NAMES = ['grade', 'pricePerT', 'validFrom'] as const;
 
 /** Sets a grade's price per tonne from a date (a price of the same grade and date is replaced). */
+/** "LPG (propane)" for the code LPG_PROPANE; other grades as the trade writes them (MGO, VLSFO…). */
+const gradeLabel = (grade: string) => grade.replace(/^(\w+)_(\w+)$/, (_, g: string, kind: string) => `${g} (${kind.toLowerCase()})`);
+
 export function FuelPriceForm({ currency, today }: { currency: string; today: string }) {
   const put = usePutFuelPrice();
   const form = useForm<FuelPriceInput>({
@@ -32,7 +35,7 @@ export function FuelPriceForm({ currency, today }: { currency: string; today: st
           <Select id="price-grade" invalid={!!e.grade} {...form.register('grade')}>
             {PRICED_FUEL_GRADES.map((g) => (
               <option key={g} value={g}>
-                {g}
+                {gradeLabel(g)}
               </option>
             ))}
           </Select>

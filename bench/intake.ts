@@ -169,10 +169,15 @@ if (import.meta.url === pathToFileURL(process.argv[1]).href) {
   (async () => {
     const given = process.env.KILOWATCH_BENCH_ADMIN_URL;
     if (given) return main({ adminUrl: given });
-    const { ensureCluster, freePort } = await import('../scripts/lib/postgres');
+    const { ensureCluster, freePort, stopCluster } = await import('../scripts/lib/postgres');
     const { ROOT } = await import('../scripts/lib/bootstrap');
-    const cluster = await ensureCluster(path.join(ROOT, '.tmp', 'pg-bench-intake'), await freePort());
-    return main({ adminUrl: cluster.adminUrl });
+    const dir = path.join(ROOT, '.tmp', 'pg-bench-intake');
+    const cluster = await ensureCluster(dir, await freePort());
+    try {
+      return await main({ adminUrl: cluster.adminUrl });
+    } finally {
+      stopCluster(dir);
+    }
   })()
     .then(() => process.exit(0))
     .catch((err: Error) => {

@@ -15,7 +15,12 @@ const TONE = { proposed: 'accent', approved: 'good', superseded: 'neutral' } as 
 export function HourBudgetPlans({ vesselId, plans, canApprove }: { vesselId: string; plans: HourBudgetPlan[]; canApprove: boolean }) {
   const approve = useApproveHourBudget();
   const [open, setOpen] = useState<string | null>(null);
-  if (!plans.length) return <EmptyState title="No hour-budget plans yet" next="Propose budgets above and save them." />;
+  if (!plans.length) {
+    const next = canApprove
+      ? 'Propose budgets above and save them.'
+      : 'A maintenance planner or technical superintendent proposes and approves hour budgets here.';
+    return <EmptyState title="No hour-budget plans yet" next={next} />;
+  }
   const shown = plans.find((p) => p.id === open);
   return (
     <div className="space-y-3">

@@ -22,6 +22,9 @@ export function timelineOption(sets: SetOverhaul[], windows: WorkWindow[]): ECha
     tooltip: {
       trigger: 'item',
       formatter: (p: unknown) => {
+        // A shaded work window: its kind and place (narrow windows carry no label of their own).
+        const item = p as { componentType?: string; name?: string };
+        if (item.componentType === 'markArea') return item.name ?? '';
         const v = (p as { data: { value: [number, string]; hoursLeft: number; kind: string; governedBy: string | null } }).data;
         const date = new Date(v.value[0]).toISOString().slice(0, 10);
         return `${v.value[1]} ${v.kind}<br/>due ${date}${v.governedBy ? ` (by ${v.governedBy})` : ''}<br/>${Math.round(v.hoursLeft)} h left`;
@@ -46,8 +49,14 @@ export function timelineOption(sets: SetOverhaul[], windows: WorkWindow[]): ECha
               markArea: {
                 silent: false,
                 label: { show: true, position: 'insideTop' as const, fontSize: 10 },
+                // Port calls of a few days are too narrow for a label: theirs shows on hover; dry docks keep theirs.
                 data: windows.map((w) => [
-                  { name: `${WORK_WINDOW_LABELS[w.kind]} ${w.place}`, xAxis: toMs(w.startsOn), itemStyle: { color: shade(w.kind) } },
+                  {
+                    name: `${WORK_WINDOW_LABELS[w.kind]} ${w.place}`,
+                    xAxis: toMs(w.startsOn),
+                    itemStyle: { color: shade(w.kind) },
+                    ...(toMs(w.endsOn) - toMs(w.startsOn) < 7 * DAY_MS ? { label: { show: false } } : {}),
+                  },
                   { xAxis: toMs(w.endsOn) + DAY_MS },
                 ]) as never,
               },
